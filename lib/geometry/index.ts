@@ -1,0 +1,4 @@
+export * from './vector';
+export * from './aim';
+export * from './coneSection';
+export * from './footprint';

@@ -1,0 +1,74 @@
+/**
+ * Luminous flux from an intensity distribution: Φ = ∫∫ I dΩ = ∫₀^{2π} ∫₀^{π} I(θ, φ) sin θ dθ dφ
+ * (1 lm = 1 cd·sr, SI Brochure). Rotationally symmetric beams: Φ = 2π ∫ I(θ) sin θ dθ.
+ * Composite Simpson's rule; with the default 2048 intervals the beam model integrates to better
+ * than 1e-9 relative (checked in tests against closed forms).
+ */
+import { degToRad, requireFinite } from '../numeric';
+import { simpson } from './quadrature';
+import {
+  type BeamSpread,
+  MAX_EMISSION_ANGLE_RAD,
+  roundProfile,
+  spreadProfile,
+  validateBeamAngles,
+  validateBeamSpread,
+} from './beam';
+
+/**
+ * Flux (lm) of a rotationally symmetric distribution `intensityCd(θ)` (θ in rad off axis), integrated
+ * from 0 to `maxAngleRad` (default π: the whole sphere).
+ */
+export function rotationalFluxLm(
+  intensityCd: (offAxisRad: number) => number,
+  maxAngleRad = Math.PI,
+  intervals = 2048,
+): number {
+  return 2 * Math.PI * simpson((theta) => intensityCd(theta) * Math.sin(theta), 0, maxAngleRad, intervals);
+}
+
+/** Flux of the round beam profile per candela of peak, lm/cd (= sr). */
+export function roundBeamSolidAngleSr(beamAngleDeg: number, fieldAngleDeg: number): number {
+  validateBeamAngles(beamAngleDeg, fieldAngleDeg);
+  const beamHalf = degToRad(beamAngleDeg / 2);
+  const fieldHalf = degToRad(fieldAngleDeg / 2);
+  return rotationalFluxLm((theta) => roundProfile(theta, beamHalf, fieldHalf), MAX_EMISSION_ANGLE_RAD);
+}
+
+/** Flux of any spread (round or oval) per candela of peak, lm/cd; oval beams by 2D Simpson. */
+export function beamSolidAngleSr(spread: BeamSpread): number {
+  validateBeamSpread(spread);
+  if (spread.kind === 'round') return roundBeamSolidAngleSr(spread.beamAngleDeg, spread.fieldAngleDeg);
+  const perAzimuth = (azimuthRad: number) =>
+    simpson(
+      (theta) => spreadProfile(spread, theta, azimuthRad) * Math.sin(theta),
+      0,
+      MAX_EMISSION_ANGLE_RAD,
+      512,
+    );
+  return simpson(perAzimuth, 0, 2 * Math.PI, 256);
+}
+
+/** Total lumens of a round beam with peak `peakCd` and the given full beam/field angles. */
+export function lumensFromPeakCandela(peakCd: number, beamAngleDeg: number, fieldAngleDeg: number): number {
+  requireFinite(peakCd, 'peak intensity');
+  if (peakCd < 0) throw new RangeError(`peak intensity must not be negative (got ${peakCd} cd)`);
+  return peakCd * roundBeamSolidAngleSr(beamAngleDeg, fieldAngleDeg);
+}
+
+/**
+ * Peak candela of a round beam emitting `lumens` into the given beam/field angles: a zoom fixture
+ * keeps its lumens, so its peak rises as it narrows.
+ */
+export function peakCandelaFromLumens(lumens: number, beamAngleDeg: number, fieldAngleDeg: number): number {
+  requireFinite(lumens, 'lumens');
+  if (lumens < 0) throw new RangeError(`lumens must not be negative (got ${lumens} lm)`);
+  return lumens / roundBeamSolidAngleSr(beamAngleDeg, fieldAngleDeg);
+}
+
+/** Peak candela of any spread (round or oval) emitting `lumens`. */
+export function peakCandelaForSpread(lumens: number, spread: BeamSpread): number {
+  requireFinite(lumens, 'lumens');
+  if (lumens < 0) throw new RangeError(`lumens must not be negative (got ${lumens} lm)`);
+  return lumens / beamSolidAngleSr(spread);
+}

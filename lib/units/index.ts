@@ -1,0 +1,3 @@
+export * from './length';
+export * from './illuminance';
+export * from './stops';

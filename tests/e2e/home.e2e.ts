@@ -1,0 +1,63 @@
+import { mkdir } from 'node:fs/promises';
+import path from 'node:path';
+import type { Browser } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { launchBrowser, recordPageProblems } from './support/browser';
+
+const artifactsDir = path.resolve(import.meta.dirname, '..', '..', 'test-artifacts');
+
+let browser: Browser;
+
+beforeAll(async () => {
+  browser = await launchBrowser();
+});
+
+afterAll(async () => {
+  await browser?.close();
+});
+
+describe('home page', () => {
+  it('shows the app name, draws the stage plan, and logs no errors or failed requests', async () => {
+    const page = await browser.newPage({ viewport: { width: 1280, height: 800 } });
+    const problems = recordPageProblems(page);
+
+    const response = await page.goto(inject('baseUrl'), { waitUntil: 'load' });
+    expect(response?.status()).toBe(200);
+    expect(await page.title()).toBe('Throwline — stage and studio lighting plots');
+    expect(await page.locator('h1').innerText()).toBe('Throwline');
+
+    const plan = page.getByRole('img', { name: /stage plan: 8 m wide by 6 m deep/i });
+    await plan.locator('canvas').first().waitFor({ state: 'visible' });
+    const planBox = await plan.boundingBox();
+    expect(planBox?.width).toBeGreaterThan(600);
+    expect(planBox?.height).toBeGreaterThan(300);
+
+    // Konva drew something: some pixels of the layer canvas are not transparent.
+    const paintedPixels = await plan
+      .locator('canvas')
+      .first()
+      .evaluate((canvas: HTMLCanvasElement) => {
+        const context = canvas.getContext('2d');
+        if (context === null) return 0;
+        const { data } = context.getImageData(0, 0, canvas.width, canvas.height);
+        let count = 0;
+        for (let index = 3; index < data.length; index += 4) if (data[index] > 0) count += 1;
+        return count;
+      });
+    expect(paintedPixels).toBeGreaterThan(1000);
+
+    await mkdir(artifactsDir, { recursive: true });
+    await page.screenshot({ path: path.join(artifactsDir, 'home.png'), fullPage: true });
+
+    expect(problems.pageErrors).toEqual([]);
+    expect(problems.consoleErrors).toEqual([]);
+    expect(problems.failedRequests).toEqual([]);
+    await page.close();
+  });
+
+  it('serves the app icon', async () => {
+    const response = await fetch(new URL('/icon.svg', inject('baseUrl')));
+    expect(response.status).toBe(200);
+    expect(response.headers.get('content-type')).toContain('image/svg+xml');
+  });
+});
