@@ -235,3 +235,54 @@ function alongSign(alongDirection: Vec3, axis: Vec3): number {
   if (planAxis <= 1e-12) return 1;
   return alongDirection.x * axis.x + alongDirection.y * axis.y >= 0 ? 1 : -1;
 }
+
+/**
+ * Footprint figures measured from a sampled outline (for oval beams, where no closed form is used):
+ * near/far along the beam's plan bearing from the point under the fixture, greatest width across it,
+ * and the shoelace area. Accurate to the outline's sampling (96 points: well under 0.1 % in area).
+ */
+export function footprintFromOutline(mount: Vec3, focus: Vec3, outline: ConeSectionOutline): Footprint {
+  const polygon = outline.polygon.map((point) => ({ x: point.x, y: point.y }));
+  if (outline.state !== 'closed') {
+    return {
+      open: true,
+      state: outline.state,
+      nearM: null,
+      farM: null,
+      lengthM: null,
+      widthM: null,
+      widthAtAxisM: null,
+      areaM2: null,
+      polygon,
+    };
+  }
+  const planLength = Math.hypot(focus.x - mount.x, focus.y - mount.y);
+  const along =
+    planLength > 1e-12
+      ? { x: (focus.x - mount.x) / planLength, y: (focus.y - mount.y) / planLength }
+      : { x: 0, y: -1 };
+  const across = { x: -along.y, y: along.x };
+  const alongValues = polygon.map((point) => (point.x - mount.x) * along.x + (point.y - mount.y) * along.y);
+  const acrossValues = polygon.map(
+    (point) => (point.x - mount.x) * across.x + (point.y - mount.y) * across.y,
+  );
+  let twiceArea = 0;
+  for (let index = 0; index < polygon.length; index += 1) {
+    const a = polygon[index];
+    const b = polygon[(index + 1) % polygon.length];
+    twiceArea += a.x * b.y - b.x * a.y;
+  }
+  const nearM = Math.min(...alongValues);
+  const farM = Math.max(...alongValues);
+  return {
+    open: false,
+    state: 'closed',
+    nearM,
+    farM,
+    lengthM: farM - nearM,
+    widthM: Math.max(...acrossValues) - Math.min(...acrossValues),
+    widthAtAxisM: null,
+    areaM2: Math.abs(twiceArea) / 2,
+    polygon,
+  };
+}

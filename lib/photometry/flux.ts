@@ -35,10 +35,32 @@ export function roundBeamSolidAngleSr(beamAngleDeg: number, fieldAngleDeg: numbe
   return rotationalFluxLm((theta) => roundProfile(theta, beamHalf, fieldHalf), MAX_EMISSION_ANGLE_RAD);
 }
 
-/** Flux of any spread (round or oval) per candela of peak, lm/cd; oval beams by 2D Simpson. */
+const solidAngleCache = new Map<string, number>();
+const SOLID_ANGLE_CACHE_SIZE = 512;
+
+/**
+ * Flux of any spread (round or oval) per candela of peak, lm/cd; oval beams by 2D Simpson.
+ * Memoised by the spread's angles (a pure function of them), so a rig re-resolved on every drag
+ * frame does not integrate again.
+ */
 export function beamSolidAngleSr(spread: BeamSpread): number {
   validateBeamSpread(spread);
-  if (spread.kind === 'round') return roundBeamSolidAngleSr(spread.beamAngleDeg, spread.fieldAngleDeg);
+  const key =
+    spread.kind === 'round'
+      ? `r:${spread.beamAngleDeg}:${spread.fieldAngleDeg}`
+      : `o:${spread.beamAngleXDeg}:${spread.fieldAngleXDeg}:${spread.beamAngleYDeg}:${spread.fieldAngleYDeg}`;
+  const cached = solidAngleCache.get(key);
+  if (cached !== undefined) return cached;
+  const value =
+    spread.kind === 'round'
+      ? roundBeamSolidAngleSr(spread.beamAngleDeg, spread.fieldAngleDeg)
+      : ovalSolidAngleSr(spread);
+  if (solidAngleCache.size >= SOLID_ANGLE_CACHE_SIZE) solidAngleCache.clear();
+  solidAngleCache.set(key, value);
+  return value;
+}
+
+function ovalSolidAngleSr(spread: BeamSpread): number {
   const perAzimuth = (azimuthRad: number) =>
     simpson(
       (theta) => spreadProfile(spread, theta, azimuthRad) * Math.sin(theta),

@@ -1,0 +1,4 @@
+export * from './rig';
+export * from './fixtureLight';
+export * from './fixtureFocus';
+export * from './subjectLight';

@@ -1,0 +1,4 @@
+export * from './fixtures';
+export * from './positions';
+export * from './people';
+export * from './show';

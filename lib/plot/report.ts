@@ -1,0 +1,118 @@
+/**
+ * The plot report: the numbers a crew needs, per fixture and per subject, as plain data with stable
+ * names (scripts and outside verification read them; keep them stable). SI units throughout.
+ */
+import { fixtureFocus, subjectFaceLight } from '../analysis';
+import type { Footprint } from '../geometry';
+import type { PlotDocument } from './schema/document';
+import { mainViewpointPosition, resolveRig, subjectPlacements } from './resolve';
+
+export interface ReportFootprint {
+  readonly open: boolean;
+  readonly state: string;
+  readonly nearM: number | null;
+  readonly farM: number | null;
+  readonly widthM: number | null;
+  readonly areaM2: number | null;
+}
+
+export interface ReportFixture {
+  readonly id: string;
+  readonly unit: number | null;
+  /** Position name, or null for a free-standing unit. */
+  readonly position: string | null;
+  readonly type: string;
+  readonly channel: number | null;
+  readonly levelPct: number;
+  readonly throwM: number | null;
+  readonly panDeg: number | null;
+  readonly tiltDeg: number | null;
+  readonly beamAngleDeg: number | null;
+  readonly fieldAngleDeg: number | null;
+  readonly beamDiameterM: number | null;
+  readonly fieldDiameterM: number | null;
+  readonly centreLx: number | null;
+  /** The beam pool on the focus plane. */
+  readonly footprint: ReportFootprint | null;
+  /** The field pool on the focus plane. */
+  readonly fieldFootprint: ReportFootprint | null;
+  readonly problem: string | null;
+}
+
+export interface ReportSubject {
+  readonly id: string;
+  readonly name: string;
+  /** 'viewpoint' when the face is judged toward the main viewpoint, 'facing' otherwise. */
+  readonly judgedToward: 'viewpoint' | 'facing';
+  readonly totalFaceLx: number;
+  /** Every source's light on the face, largest first. */
+  readonly sources: readonly { readonly fixtureId: string; readonly faceLx: number }[];
+}
+
+export interface PlotReport {
+  readonly show: string;
+  readonly venue: string;
+  readonly focusPlaneHeightM: number;
+  readonly mainViewpoint: string | null;
+  readonly fixtures: readonly ReportFixture[];
+  readonly subjects: readonly ReportSubject[];
+}
+
+function reportFootprint(footprint: Footprint | null): ReportFootprint | null {
+  if (!footprint) return null;
+  const { open, state, nearM, farM, widthM, areaM2 } = footprint;
+  return { open, state, nearM, farM, widthM, areaM2 };
+}
+
+/** Build the report of a valid document. */
+export function buildReport(document: PlotDocument): PlotReport {
+  const rig = resolveRig(document);
+  const rigById = new Map(rig.map((fixture) => [fixture.id, fixture]));
+  const types = new Map(document.fixtureTypes.map((type) => [type.id, type]));
+  const positions = new Map(document.positions.map((position) => [position.id, position]));
+  const fixtures = document.fixtures.flatMap((unit): ReportFixture[] => {
+    const resolved = rigById.get(unit.id);
+    if (!resolved) return [];
+    const focus = fixtureFocus(resolved, document.focusPlaneHeightM);
+    return [
+      {
+        id: unit.id,
+        unit: unit.unit,
+        position: unit.positionId === null ? null : (positions.get(unit.positionId)?.name ?? null),
+        type: types.get(unit.typeId)?.name ?? unit.typeId,
+        channel: unit.channel,
+        levelPct: unit.levelPct,
+        throwM: focus.aim?.throwM ?? null,
+        panDeg: focus.aim?.panDeg ?? null,
+        tiltDeg: focus.aim?.tiltDeg ?? null,
+        beamAngleDeg: focus.angles?.beamAngleDeg ?? null,
+        fieldAngleDeg: focus.angles?.fieldAngleDeg ?? null,
+        beamDiameterM: focus.beamDiameterM,
+        fieldDiameterM: focus.fieldDiameterM,
+        centreLx: focus.centreLx,
+        footprint: reportFootprint(focus.beamPool),
+        fieldFootprint: reportFootprint(focus.fieldPool),
+        problem: focus.problem,
+      },
+    ];
+  });
+  const viewpoint = mainViewpointPosition(document);
+  const subjects = subjectPlacements(document).map((placement, index): ReportSubject => {
+    const light = subjectFaceLight(placement, viewpoint, rig);
+    return {
+      id: placement.id,
+      name: document.subjects[index].name,
+      judgedToward: light.judgedToward,
+      totalFaceLx: light.totalFaceLx,
+      sources: light.sources,
+    };
+  });
+  return {
+    show: document.name,
+    venue: document.venue,
+    focusPlaneHeightM: document.focusPlaneHeightM,
+    mainViewpoint: document.viewpoints.find((view) => view.id === document.mainViewpointId)?.name ?? null,
+    fixtures,
+    subjects,
+  };
+}

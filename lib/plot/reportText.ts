@@ -1,0 +1,103 @@
+/** The plot report as text for a terminal or a printout, in metric or imperial display units. */
+import { formatFeetInches, luxToFootcandles, metresToFeet } from '../units';
+import type { PlotReport, ReportFootprint } from './report';
+
+export type DisplayUnits = 'metric' | 'imperial';
+
+const DASH = '—';
+
+function length(valueM: number | null, units: DisplayUnits): string {
+  if (valueM === null || !Number.isFinite(valueM)) return DASH;
+  return units === 'metric' ? `${valueM.toFixed(2)} m` : formatFeetInches(valueM);
+}
+
+function illuminance(valueLx: number | null, units: DisplayUnits): string {
+  if (valueLx === null || !Number.isFinite(valueLx)) return DASH;
+  return units === 'metric' ? `${valueLx.toFixed(0)} lx` : `${luxToFootcandles(valueLx).toFixed(1)} fc`;
+}
+
+function angle(valueDeg: number | null): string {
+  return valueDeg === null || !Number.isFinite(valueDeg) ? DASH : `${valueDeg.toFixed(1)}°`;
+}
+
+function pool(footprint: ReportFootprint | null, units: DisplayUnits): string {
+  if (!footprint) return DASH;
+  if (footprint.state === 'misses') return 'misses the focus plane';
+  if (footprint.state === 'apex-on-plane') return 'hangs in the focus plane: no pool on it';
+  if (footprint.open) return `open: from ${length(footprint.nearM, units)} out, spills past the horizon`;
+  const area =
+    footprint.areaM2 === null
+      ? DASH
+      : units === 'metric'
+        ? `${footprint.areaM2.toFixed(1)} m²`
+        : `${(footprint.areaM2 * metresToFeet(1) ** 2).toFixed(0)} ft²`;
+  return `${length(footprint.nearM, units)} to ${length(footprint.farM, units)} out, ${length(footprint.widthM, units)} wide, ${area}`;
+}
+
+function table(rows: string[][]): string {
+  const widths = rows[0].map((_, column) => Math.max(...rows.map((row) => row[column].length)));
+  return rows
+    .map((row) =>
+      row
+        .map((cell, column) => cell.padEnd(widths[column]))
+        .join('  ')
+        .trimEnd(),
+    )
+    .join('\n');
+}
+
+/** Text of the report (fixtures table, pools, subject light) in the chosen display units. */
+export function formatReportText(report: PlotReport, units: DisplayUnits): string {
+  const lines: string[] = [];
+  lines.push(`${report.show}${report.venue ? ` — ${report.venue}` : ''}`);
+  lines.push(
+    `Focus plane ${length(report.focusPlaneHeightM, units)} above the stage; faces judged from ${report.mainViewpoint ?? 'each subject’s facing (no viewpoint)'}.`,
+  );
+  lines.push('');
+  lines.push('FIXTURES');
+  const names = new Map(report.fixtures.map((fixture) => [fixture.id, label(fixture)]));
+  lines.push(
+    table([
+      ['Unit', 'Type', 'Ch', 'Level', 'Throw', 'Pan', 'Tilt', 'Beam ⌀', 'Field ⌀', 'Centre'],
+      ...report.fixtures.map((fixture) => [
+        label(fixture),
+        fixture.type,
+        fixture.channel === null ? DASH : String(fixture.channel),
+        `${fixture.levelPct.toFixed(0)} %`,
+        length(fixture.throwM, units),
+        angle(fixture.panDeg),
+        angle(fixture.tiltDeg),
+        length(fixture.beamDiameterM, units),
+        length(fixture.fieldDiameterM, units),
+        illuminance(fixture.centreLx, units),
+      ]),
+    ]),
+  );
+  lines.push('');
+  lines.push('POOLS ON THE FOCUS PLANE (beam edge; distances from the point under the unit, along its aim)');
+  const labelWidth = Math.max(0, ...report.fixtures.map((fixture) => label(fixture).length));
+  for (const fixture of report.fixtures) {
+    const note = fixture.problem ? `  (${fixture.problem})` : '';
+    const shape =
+      fixture.beamAngleDeg === null && !fixture.problem
+        ? 'soft source: no beam edge'
+        : pool(fixture.footprint, units);
+    lines.push(`  ${label(fixture).padEnd(labelWidth)}  ${shape}${note}`);
+  }
+  lines.push('');
+  lines.push(`LIGHT ON FACES (vertical, toward ${report.mainViewpoint ?? 'each subject’s facing'})`);
+  for (const subject of report.subjects) {
+    lines.push(`  ${subject.name}: ${illuminance(subject.totalFaceLx, units)} in all`);
+    for (const source of subject.sources.filter((entry) => entry.faceLx >= 0.5)) {
+      lines.push(
+        `    ${(names.get(source.fixtureId) ?? source.fixtureId).padEnd(labelWidth)}  ${illuminance(source.faceLx, units)}`,
+      );
+    }
+  }
+  return `${lines.join('\n')}\n`;
+}
+
+function label(fixture: { position: string | null; unit: number | null; id: string }): string {
+  if (fixture.position === null) return fixture.id;
+  return `${fixture.position} #${fixture.unit ?? '?'}`;
+}

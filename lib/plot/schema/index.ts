@@ -1,0 +1,6 @@
+export * from './primitives';
+export * from './stage';
+export * from './fixtureType';
+export * from './fixture';
+export * from './people';
+export * from './document';

@@ -1,0 +1,55 @@
+/**
+ * Command-line report: `npm run report -- <file.json> [--json] [--units metric|imperial]`.
+ * Prints the focus figures of every fixture and the light on every face. Bad files print every
+ * problem with its path and exit with status 1; bad arguments exit with status 2.
+ */
+import { readFileSync } from 'node:fs';
+import { buildReport, formatReportText, loadPlotText } from '../lib/plot';
+
+function usage(message: string): never {
+  process.stderr.write(
+    `${message}\nUsage: npm run report -- <plot.json> [--json] [--units metric|imperial]\n`,
+  );
+  process.exit(2);
+}
+
+const args = process.argv.slice(2);
+let file: string | null = null;
+let asJson = false;
+let units: 'metric' | 'imperial' | null = null;
+for (let index = 0; index < args.length; index += 1) {
+  const arg = args[index];
+  if (arg === '--json') asJson = true;
+  else if (arg === '--units') {
+    const value = args[(index += 1)];
+    if (value !== 'metric' && value !== 'imperial')
+      usage(`--units must be metric or imperial (got ${value ?? 'nothing'})`);
+    units = value;
+  } else if (arg.startsWith('--')) usage(`unknown option ${arg}`);
+  else if (file === null) file = arg;
+  else usage(`only one file at a time (got ${file} and ${arg})`);
+}
+if (file === null) usage('name a plot file');
+
+let text: string;
+try {
+  text = readFileSync(file, 'utf8');
+} catch (error) {
+  process.stderr.write(
+    `${file}: cannot read it (${(error as NodeJS.ErrnoException).code ?? (error as Error).message})\n`,
+  );
+  process.exit(1);
+}
+const loaded = loadPlotText(text);
+if (!loaded.ok) {
+  process.stderr.write(
+    `${file} is not a valid plot file:\n${loaded.errors.map((line) => `  ${line}`).join('\n')}\n`,
+  );
+  process.exit(1);
+}
+const report = buildReport(loaded.document);
+process.stdout.write(
+  asJson
+    ? `${JSON.stringify(report, null, 2)}\n`
+    : formatReportText(report, units ?? loaded.document.displayUnits),
+);
