@@ -2,3 +2,4 @@ export * from './rig';
 export * from './fixtureLight';
 export * from './fixtureFocus';
 export * from './subjectLight';
+export * from './pointLight';

@@ -7,5 +7,6 @@ export * from './command';
 export * from './store';
 export * from './commands';
 export * from './resolve';
+export * from './derive';
 export * from './report';
 export * from './reportText';

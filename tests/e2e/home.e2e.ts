@@ -17,7 +17,7 @@ afterAll(async () => {
 });
 
 describe('home page', () => {
-  it('shows the app name, draws the stage plan, and logs no errors or failed requests', async () => {
+  it('opens the demo plot, draws the stage plan, and logs no errors or failed requests', async () => {
     const page = await browser.newPage({ viewport: { width: 1280, height: 800 } });
     const problems = recordPageProblems(page);
 
@@ -26,7 +26,8 @@ describe('home page', () => {
     expect(await page.title()).toBe('Throwline — stage and studio lighting plots');
     expect(await page.locator('h1').innerText()).toBe('Throwline');
 
-    const plan = page.getByRole('img', { name: /stage plan: 8 m wide by 6 m deep/i });
+    expect(await page.getByText('The Salt Ledger — studio plot').first().isVisible()).toBe(true);
+    const plan = page.getByRole('img', { name: /^Stage plan of The Salt Ledger/ });
     await plan.locator('canvas').first().waitFor({ state: 'visible' });
     const planBox = await plan.boundingBox();
     expect(planBox?.width).toBeGreaterThan(600);

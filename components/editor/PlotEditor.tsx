@@ -1,0 +1,99 @@
+'use client';
+
+import dynamic from 'next/dynamic';
+import { useCallback, useState } from 'react';
+import type { PlotDocument } from '@/lib/plot';
+import { Inspector } from '../panels/Inspector';
+import { ListsPanel } from '../panels/ListsPanel';
+import type { ViewTransform } from '../canvas/viewTransform';
+import { zoomAt } from '../canvas/viewTransform';
+import { EditorProvider, useEditor } from './EditorContext';
+import { Toolbar } from './Toolbar';
+import type { Tool } from './tools';
+import { useShortcuts } from './useShortcuts';
+
+// Konva needs the browser's canvas: the plan is drawn on the client only.
+const PlanCanvas = dynamic(() => import('../canvas/PlanCanvas'), {
+  ssr: false,
+  loading: () => <div className="plan-canvas plan-canvas--loading">Drawing the plan…</div>,
+});
+
+/** The whole editing screen for one plot. */
+export function PlotEditor({ initialDocument }: { initialDocument: PlotDocument }) {
+  return (
+    <EditorProvider initialDocument={initialDocument}>
+      <EditorLayout />
+    </EditorProvider>
+  );
+}
+
+function EditorLayout() {
+  const editor = useEditor();
+  useShortcuts(editor);
+  const [tool, setTool] = useState<Tool>({ kind: 'select' });
+  const [view, setView] = useState<ViewTransform | null>(null);
+  const [fitRequest, setFitRequest] = useState(0);
+  const [showAllPools, setShowAllPools] = useState(true);
+  const [canvasSize, setCanvasSize] = useState({ width: 0, height: 0 });
+  const zoom = useCallback(
+    (factor: number) =>
+      setView((current) =>
+        current ? zoomAt(current, { x: canvasSize.width / 2, y: canvasSize.height / 2 }, factor) : current,
+      ),
+    [canvasSize],
+  );
+  return (
+    <div className="editor">
+      <header className="editor-header">
+        <div>
+          <h1>Throwline</h1>
+          <p className="editor-show">
+            {editor.document.name}
+            {editor.document.venue ? <span> — {editor.document.venue}</span> : null}
+          </p>
+        </div>
+        <Toolbar
+          tool={tool}
+          onToolChange={setTool}
+          onZoom={zoom}
+          onFit={() => setFitRequest((count) => count + 1)}
+          showAllPools={showAllPools}
+          onShowAllPoolsChange={setShowAllPools}
+        />
+      </header>
+      <aside className="editor-lists" aria-label="Show lists">
+        <ListsPanel />
+      </aside>
+      <main className="editor-plan">
+        <h2 className="visually-hidden">Stage plan</h2>
+        <PlanCanvas
+          tool={tool}
+          view={view}
+          onViewChange={setView}
+          onCanvasSize={setCanvasSize}
+          fitRequest={fitRequest}
+          showAllPools={showAllPools}
+        />
+      </main>
+      <aside className="editor-inspector" aria-label="Selected item">
+        <Inspector />
+      </aside>
+      <footer className="editor-status" role="status" aria-live="polite">
+        {editor.message ?? statusHint(tool)}
+      </footer>
+    </div>
+  );
+}
+
+function statusHint(tool: Tool): string {
+  switch (tool.kind) {
+    case 'select':
+      return 'Drag a unit along its position, a focus point to aim, a subject or its facing handle; drag empty plan to box-select. Wheel zooms, Space+drag pans. Arrows nudge, Delete removes, Ctrl+D duplicates, Ctrl+Z undoes.';
+    case 'hang':
+      return 'Click on a position to hang a unit of the chosen type there.';
+    case 'subject':
+      return 'Click the plan to place a subject.';
+    case 'measure':
+      return 'Drag to measure a distance on the plan.';
+  }
+}
