@@ -4,8 +4,10 @@
  * Beam angle: full angle where intensity falls to 50 % of peak; field angle: to 10 %
  * (REFERENCE-CHECKS §3). The profile I(θ) = I0 · exp(−ln2 · (θ / hb)^p), hb = beam/2,
  * hf = field/2, p = ln(ln10 / ln2) / ln(hf / hb) is smooth, falls monotonically and meets both points
- * exactly. Limits: no hard cut-off shape, no shutter cuts, no off-axis peak; nothing is emitted more
- * than 90° off axis (the housing). Measured photometry replaces it when a file is given.
+ * exactly. The model ends where it falls to 0.1 % of peak (PROFILE_EDGE_FRACTION): beyond that edge,
+ * and beyond 90° off axis (the housing), it emits nothing; so a beam lights a bounded region, which the
+ * coverage engine relies on to skip cells exactly. Limits: no hard cut-off shape, no shutter cuts, no
+ * off-axis peak. Measured photometry replaces it when a file is given.
  *
  * Oval beams: the 50 % and 10 % contours are ellipses in angle space. At azimuth φ about the axis
  * (from the beam's X direction) the half-angles are hb(φ) = 1/√(cos²φ/hbX² + sin²φ/hbY²) (and the
@@ -19,6 +21,9 @@ const EXPONENT_NUMERATOR = Math.log(Math.LN10 / Math.LN2);
 
 /** Beyond this angle off axis the model emits nothing (rad). */
 export const MAX_EMISSION_ANGLE_RAD = Math.PI / 2;
+
+/** The model's edge: where the profile falls below this fraction of peak it is taken as zero (0.1 %). */
+export const PROFILE_EDGE_FRACTION = 1e-3;
 
 export type BeamSpread =
   | { readonly kind: 'round'; readonly beamAngleDeg: number; readonly fieldAngleDeg: number }
@@ -67,11 +72,26 @@ export function profileExponent(beamHalfAngle: number, fieldHalfAngle: number): 
   return EXPONENT_NUMERATOR / Math.log(fieldHalfAngle / beamHalfAngle);
 }
 
+/** The smooth profile without its edge: exp(−ln2·(θ/hb)^p); for integrating up to the edge angle. */
+export function profileShape(offAxisRad: number, beamHalfRad: number, fieldHalfRad: number): number {
+  return Math.exp(-Math.LN2 * Math.pow(offAxisRad / beamHalfRad, profileExponent(beamHalfRad, fieldHalfRad)));
+}
+
 /** Relative intensity (0–1) at `offAxisRad` for half-angles in radians; no validation (hot path). */
 export function roundProfile(offAxisRad: number, beamHalfRad: number, fieldHalfRad: number): number {
   if (offAxisRad >= MAX_EMISSION_ANGLE_RAD) return 0;
+  const value = profileShape(offAxisRad, beamHalfRad, fieldHalfRad);
+  return value < PROFILE_EDGE_FRACTION ? 0 : value;
+}
+
+/**
+ * Off-axis angle (rad) of the model's edge for half-angles in radians: where the profile reaches
+ * PROFILE_EDGE_FRACTION, hb·(ln(1/ε)/ln 2)^(1/p), capped at 90°.
+ */
+export function profileEdgeAngleRad(beamHalfRad: number, fieldHalfRad: number): number {
   const exponent = profileExponent(beamHalfRad, fieldHalfRad);
-  return Math.exp(-Math.LN2 * Math.pow(offAxisRad / beamHalfRad, exponent));
+  const edge = beamHalfRad * Math.pow(Math.log(1 / PROFILE_EDGE_FRACTION) / Math.LN2, 1 / exponent);
+  return Math.min(edge, MAX_EMISSION_ANGLE_RAD);
 }
 
 /**

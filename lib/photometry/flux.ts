@@ -8,9 +8,9 @@ import { degToRad, requireFinite } from '../numeric';
 import { simpson } from './quadrature';
 import {
   type BeamSpread,
-  MAX_EMISSION_ANGLE_RAD,
-  roundProfile,
-  spreadProfile,
+  profileEdgeAngleRad,
+  profileShape,
+  spreadHalfAnglesAt,
   validateBeamAngles,
   validateBeamSpread,
 } from './beam';
@@ -32,7 +32,11 @@ export function roundBeamSolidAngleSr(beamAngleDeg: number, fieldAngleDeg: numbe
   validateBeamAngles(beamAngleDeg, fieldAngleDeg);
   const beamHalf = degToRad(beamAngleDeg / 2);
   const fieldHalf = degToRad(fieldAngleDeg / 2);
-  return rotationalFluxLm((theta) => roundProfile(theta, beamHalf, fieldHalf), MAX_EMISSION_ANGLE_RAD);
+  // Integrate up to the model's edge, where the profile stops: the integrand is smooth there.
+  return rotationalFluxLm(
+    (theta) => profileShape(theta, beamHalf, fieldHalf),
+    profileEdgeAngleRad(beamHalf, fieldHalf),
+  );
 }
 
 const solidAngleCache = new Map<string, number>();
@@ -61,13 +65,15 @@ export function beamSolidAngleSr(spread: BeamSpread): number {
 }
 
 function ovalSolidAngleSr(spread: BeamSpread): number {
-  const perAzimuth = (azimuthRad: number) =>
-    simpson(
-      (theta) => spreadProfile(spread, theta, azimuthRad) * Math.sin(theta),
+  const perAzimuth = (azimuthRad: number) => {
+    const { beamHalfRad, fieldHalfRad } = spreadHalfAnglesAt(spread, azimuthRad);
+    return simpson(
+      (theta) => profileShape(theta, beamHalfRad, fieldHalfRad) * Math.sin(theta),
       0,
-      MAX_EMISSION_ANGLE_RAD,
+      profileEdgeAngleRad(beamHalfRad, fieldHalfRad),
       512,
     );
+  };
   return simpson(perAzimuth, 0, 2 * Math.PI, 256);
 }
 

@@ -3,6 +3,7 @@ import fc from 'fast-check';
 import {
   type BeamSpread,
   beamIntensityTowardCd,
+  profileEdgeAngleRad,
   profileExponent,
   relativeIntensity,
   spreadProfile,
@@ -49,6 +50,25 @@ describe('the beam model from beam and field angles', () => {
           expect(here).toBeLessThanOrEqual(1);
         },
       ),
+    );
+  });
+
+  it('ends where it falls to 0.1 % of peak: a 26°/40° beam stops at 29.7° off axis', () => {
+    // Bisection on 0.5^((θ/13)^p) = 0.001 with p = ln(ln10/ln2)/ln(20/13), the model's definition.
+    const p = Math.log(Math.LN10 / Math.LN2) / Math.log(20 / 13);
+    let low = 13;
+    let high = 89;
+    for (let step = 0; step < 80; step += 1) {
+      const middle = (low + high) / 2;
+      if (0.5 ** ((middle / 13) ** p) > 0.001) low = middle;
+      else high = middle;
+    }
+    expect(low).toBeCloseTo(29.664, 3);
+    expect(relativeIntensity(low - 0.01, 26, 40)).toBeGreaterThan(0.001);
+    expect(relativeIntensity(low + 0.01, 26, 40)).toBe(0);
+    expect((profileEdgeAngleRad((13 * Math.PI) / 180, (20 * Math.PI) / 180) * 180) / Math.PI).toBeCloseTo(
+      low,
+      9,
     );
   });
 

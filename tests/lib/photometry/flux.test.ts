@@ -36,10 +36,28 @@ describe('flux from intensity: closed forms', () => {
   });
 
   // REFERENCE-CHECKS §4 [DER]: a Gaussian beam of 26° (σ = 11.0412°) and 10 000 cd is exactly 2304.61 lm.
-  it('the beam model with a Gaussian field/beam ratio reproduces 2304.61 lm for 10 000 cd at 26°', () => {
+  it('a Gaussian of σ = 11.0412° and 10 000 cd integrates to 2304.61 lm', () => {
+    const sigma = rad(11.0412);
+    expect(rotationalFluxLm((theta) => 10000 * Math.exp(-(theta ** 2) / (2 * sigma ** 2)))).toBeCloseTo(
+      2304.61,
+      2,
+    );
+  });
+
+  it('the beam model with a Gaussian field/beam ratio is that Gaussian, ending where it falls to 0.1 % of peak', () => {
     const field = 26 * Math.sqrt(Math.LN10 / Math.LN2); // 47.388°
     expect(field).toBeCloseTo(47.388, 3);
-    expect(lumensFromPeakCandela(10000, 26, field)).toBeCloseTo(2304.61, 2);
+    // Half-width at half maximum 13° → σ = 13°/√(2 ln 2); the Gaussian is 0.1 % at σ·√(2 ln 1000).
+    const sigma = rad(13) / Math.sqrt(2 * Math.LN2);
+    const edge = sigma * Math.sqrt(2 * Math.log(1000));
+    const gaussianToEdge = rotationalFluxLm(
+      (theta) => 10000 * Math.exp(-(theta ** 2) / (2 * sigma ** 2)),
+      edge,
+    );
+    expect(lumensFromPeakCandela(10000, 26, field)).toBeCloseTo(gaussianToEdge, 6);
+    // What the edge leaves out is about 0.1 % of the flux (small-angle: exactly ε for a Gaussian).
+    expect(gaussianToEdge / 2304.61).toBeGreaterThan(0.998);
+    expect(gaussianToEdge / 2304.61).toBeLessThan(0.9995);
   });
 });
 
