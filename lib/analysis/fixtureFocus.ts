@@ -14,7 +14,9 @@ import { areaSourceIlluminanceLx } from '../photometry/areaSource';
 import { type BeamSpread, ellipticalHalfAngle } from '../photometry/beam';
 import { spreadDiameterM } from '../photometry/spread';
 import { degToRad } from '../numeric';
+import { contourAtDeg, gridFigures } from '../formats/gridFigures';
 import { hasNoAim } from './fixtureLight';
+import { azimuthToHorizontalDeg } from './measuredSource';
 import type { RigFixture } from './rig';
 
 export interface SpreadAngles {
@@ -97,6 +99,7 @@ export function fixtureFocus(fixture: RigFixture, focusPlaneZ: number): FixtureF
     });
     return { ...empty, problem: null, aim, centreLx };
   }
+  if (source.kind === 'measured') return { ...empty, ...measuredFocus(fixture, source, focusPlaneZ), aim };
   const angles = spreadAngles(source.spread);
   const pool = (kind: 'beam' | 'field'): Footprint => {
     if (source.spread.kind === 'round') {
@@ -130,5 +133,53 @@ export function fixtureFocus(fixture: RigFixture, focusPlaneZ: number): FixtureF
     beamPool: pool('beam'),
     fieldPool: pool('field'),
     centreLx: source.peakCd / (aim.throwM * aim.throwM),
+  };
+}
+
+type MeasuredFigures = Omit<FixtureFocus, 'id' | 'aim'>;
+
+/**
+ * Focus figures of a measured unit: angles across the C0–C180 pair (and C90–C270 unless the
+ * distribution is rotationally symmetric), pools bounded by the real 50 % and 10 % iso-candela
+ * contours (edge γ every 5° of C, see gridFigures), centre illuminance from the intensity on the axis.
+ * A spread that reaches 180° or more has no diameter at the throw (null).
+ */
+function measuredFocus(
+  fixture: RigFixture,
+  source: Extract<RigFixture['source'], { kind: 'measured' }>,
+  focusPlaneZ: number,
+): MeasuredFigures {
+  const figures = gridFigures(source.grid);
+  const round = source.grid.symmetry === 'rotational';
+  const angles: SpreadAngles = {
+    beamAngleDeg: figures.c0.beamAngleDeg,
+    fieldAngleDeg: figures.c0.fieldAngleDeg,
+    beamAngleCrossDeg: round ? null : figures.c90.beamAngleDeg,
+    fieldAngleCrossDeg: round ? null : figures.c90.fieldAngleDeg,
+  };
+  const throwM = aimFromPoints(fixture.mount, fixture.focus).throwM;
+  const diameter = (angleDeg: number | null) =>
+    angleDeg === null || angleDeg <= 0 || angleDeg >= 180 ? null : spreadDiameterM(throwM, angleDeg);
+  const pool = (contourDeg: readonly number[]): Footprint =>
+    footprintFromOutline(
+      fixture.mount,
+      fixture.focus,
+      beamOutlineOnPlane(
+        fixture.mount,
+        fixture.focus,
+        (azimuthRad) => degToRad(contourAtDeg(contourDeg, azimuthToHorizontalDeg(azimuthRad))),
+        focusPlaneZ,
+      ),
+    );
+  return {
+    problem: null,
+    angles,
+    beamDiameterM: diameter(angles.beamAngleDeg),
+    fieldDiameterM: diameter(angles.fieldAngleDeg),
+    beamDiameterCrossM: diameter(angles.beamAngleCrossDeg),
+    fieldDiameterCrossM: diameter(angles.fieldAngleCrossDeg),
+    beamPool: pool(figures.beamContourDeg),
+    fieldPool: pool(figures.fieldContourDeg),
+    centreLx: (source.scale * figures.axialCd) / (throwM * throwM),
   };
 }

@@ -1,7 +1,8 @@
-/** Illuminance from one resolved fixture at a point on a surface (point-source beams, area-integrated soft sources). */
+/** Illuminance from one resolved fixture at a point on a surface (point-source beams and measured distributions, area-integrated soft sources). */
 import { type Vec3, distance, subtract } from '../geometry/vector';
 import { areaSourceIlluminanceLx } from '../photometry/areaSource';
-import { beamIlluminanceLx } from '../photometry/pointSource';
+import { beamIlluminanceLx, illuminanceAtPoint } from '../photometry/pointSource';
+import { measuredIntensityTowardCd } from './measuredSource';
 import type { RigFixture } from './rig';
 
 /** Throws below this mount-to-focus distance: the unit has no aim (m). */
@@ -37,6 +38,13 @@ export function fixtureIlluminanceLx(fixture: RigFixture, point: Vec3, normal: V
         centre: fixture.mount,
         facing: axis,
         luminanceCdPerM2: source.luminanceCdPerM2,
+        point,
+        normal,
+      });
+    case 'measured':
+      return illuminanceAtPoint({
+        source: fixture.mount,
+        intensityCd: measuredIntensityTowardCd(fixture.mount, axis, source.grid, source.scale, point),
         point,
         normal,
       });

@@ -1,5 +1,6 @@
 export * from './rig';
 export * from './fixtureLight';
+export * from './measuredSource';
 export * from './fixtureFocus';
 export * from './subjectLight';
 export * from './pointLight';

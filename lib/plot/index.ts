@@ -8,5 +8,6 @@ export * from './store';
 export * from './commands';
 export * from './resolve';
 export * from './derive';
+export * from './library';
 export * from './report';
 export * from './reportText';

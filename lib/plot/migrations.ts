@@ -28,6 +28,11 @@ export const MIGRATIONS: readonly Migration[] = [
       return { ...rest, name: rest.name ?? title, displayUnits: rest.displayUnits ?? 'metric', version: 1 };
     },
   },
+  {
+    from: 1,
+    summary: 'fixture types may carry measured photometry; existing files only change their version',
+    migrate: (file) => ({ ...file, version: 2 }),
+  },
 ];
 
 export type MigrationResult =

@@ -1,9 +1,11 @@
 /**
  * From the document to the analysis engines' plain inputs: each fixture's spread after its zoom,
- * and its output after level (through the type's dimming curve) and filter.
+ * and its output after level (through the type's dimming curve) and filter. A measured type keeps
+ * its candela grid (absolute cd at full) and gets the same output fraction as a scale.
  */
 import type { RigFixture, LightSource, SubjectPlacement } from '../analysis';
 import { type BeamSpread, beamSolidAngleSr, lightFractionAtLevel, luminanceFromLumens } from '../photometry';
+import { assertNever } from '../numeric';
 import type { PlotDocument } from './schema/document';
 import type { Fixture } from './schema/fixture';
 import type { BeamPhotometry, FixtureType, SoftPhotometry } from './schema/fixtureType';
@@ -55,18 +57,28 @@ export function outputFraction(unit: Fixture, type: FixtureType): number {
 /** One unit as the analysis engines see it. */
 export function resolveFixture(unit: Fixture, type: FixtureType): RigFixture {
   const fraction = outputFraction(unit, type);
-  let source: LightSource;
-  if (type.photometry.kind === 'beam') {
-    const spread = spreadAtZoom(type.photometry, unit.zoomBeamDeg);
-    source = { kind: 'beam', spread, peakCd: peakAtFullCd(type.photometry, spread) * fraction };
-  } else {
-    source = {
-      kind: 'soft',
-      shape: type.photometry.shape,
-      luminanceCdPerM2: softLuminanceAtFull(type.photometry) * fraction,
-    };
+  return { id: unit.id, mount: unit.mount, focus: unit.focus, source: lightSource(type, unit, fraction) };
+}
+
+function lightSource(type: FixtureType, unit: Fixture, fraction: number): LightSource {
+  const photometry = type.photometry;
+  switch (photometry.kind) {
+    case 'beam': {
+      const spread = spreadAtZoom(photometry, unit.zoomBeamDeg);
+      return { kind: 'beam', spread, peakCd: peakAtFullCd(photometry, spread) * fraction };
+    }
+    case 'soft':
+      return {
+        kind: 'soft',
+        shape: photometry.shape,
+        luminanceCdPerM2: softLuminanceAtFull(photometry) * fraction,
+      };
+    case 'measured':
+      // The grid is the document's own (immutable) object, so figures memoised on it stay valid.
+      return { kind: 'measured', grid: photometry.grid, scale: fraction };
+    default:
+      return assertNever(photometry);
   }
-  return { id: unit.id, mount: unit.mount, focus: unit.focus, source };
 }
 
 /** Every unit of a (valid) document as the analysis engines see it, in document order. */

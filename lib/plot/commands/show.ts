@@ -1,5 +1,7 @@
 /** Commands on the show as a whole: its settings, the stage outline, acting areas and fixture types. */
+import { current, isDraft } from 'immer';
 import { z } from 'zod';
+import { libraryEntry } from '../library/genericTypes';
 import { CommandRefused, checked, defineCommand, findOrRefuse, nextId, requireFreeId } from '../command';
 import {
   type FixtureType,
@@ -127,6 +129,37 @@ export const deleteFixtureType = defineCommand<{ id: string }>({
       );
     }
     draft.fixtureTypes = draft.fixtureTypes.filter((candidate) => candidate.id !== id);
+  },
+});
+
+/** Copy a fixture type under a new id (default `type-N`) and name (default "… copy"). */
+export const duplicateFixtureType = defineCommand<{ id: string; newId?: string; name?: string }>({
+  name: 'type.duplicate',
+  label: () => 'Duplicate fixture type',
+  apply(draft, { id, newId, name: newName }) {
+    const original = findOrRefuse(draft.fixtureTypes, id, 'fixture type');
+    const copyId = newId ?? nextId(draft, 'type');
+    requireFreeId(draft, copyId);
+    const copyName = newName ?? `${original.name} copy`.slice(0, 120);
+    draft.fixtureTypes.push(
+      checkedType(
+        { ...structuredClone(isDraft(original) ? current(original) : original), id: copyId, name: copyName },
+        'copied fixture type',
+      ),
+    );
+  },
+});
+
+/** Add a copy of a built-in library type to the show, so it can be hung and edited. */
+export const addLibraryFixtureType = defineCommand<{ libraryId: string; id?: string }>({
+  name: 'type.addFromLibrary',
+  label: ({ libraryId }) => `Add ${libraryEntry(libraryId)?.type.name ?? 'library type'}`,
+  apply(draft, { libraryId, id }) {
+    const entry = libraryEntry(libraryId);
+    if (!entry) throw new CommandRefused(`There is no library type "${libraryId}".`);
+    const typeId = id ?? nextId(draft, 'type');
+    requireFreeId(draft, typeId);
+    draft.fixtureTypes.push(checkedType({ ...structuredClone(entry.type), id: typeId }, 'library type'));
   },
 });
 

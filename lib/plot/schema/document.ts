@@ -7,7 +7,7 @@ import { fixture } from './fixture';
 import { subject, viewpoint } from './people';
 
 export const PLOT_FORMAT = 'throwline-plot';
-export const PLOT_VERSION = 1;
+export const PLOT_VERSION = 2;
 
 const documentShape = z.strictObject({
   format: z.literal(PLOT_FORMAT, { error: expecting(`must be "${PLOT_FORMAT}"`) }),

@@ -1,5 +1,11 @@
 /** Fixture types: what a unit is, how its light is shaped and how much it emits. */
 import { z } from 'zod';
+import {
+  MAX_HORIZONTAL_ANGLES,
+  MAX_VERTICAL_ANGLES,
+  SYMMETRIES,
+  candelaGridProblems,
+} from '../../formats/candelaGrid';
 import { finite, id, name, notes, positiveMetres, expecting } from './primitives';
 
 const angle = () => finite().gt(0, 'must be greater than 0°').lt(180, 'must be less than 180°');
@@ -70,6 +76,47 @@ export const softPhotometry = z.strictObject({
   ]),
 });
 
+/** Longest photometric file text kept in a plot for export, characters (larger files keep only the grid). */
+export const MAX_STORED_FILE_CHARS = 600_000;
+
+/**
+ * A measured candela distribution (from an IES LM-63 or EULUMDAT file). Its photometric axis
+ * (γ = 0, nadir in the file) is the unit's beam axis; C = 0 lies along the beam frame's horizontal u
+ * (see directionInBeamFrame) and C = 90 along −v: counter-clockwise seen from behind the unit,
+ * which for a unit aimed straight down is counter-clockwise seen from above, as type C files count it.
+ * Intensities are absolute cd at full; level and filter scale them.
+ */
+export const measuredPhotometry = z.strictObject({
+  kind: z.literal('measured'),
+  file: z.strictObject({
+    format: z.enum(['lm63', 'eulumdat'], { error: expecting('must be lm63 or eulumdat') }),
+    fileName: z
+      .string({ error: expecting('must be text') })
+      .min(1, 'must not be empty')
+      .max(255, 'must be at most 255 characters'),
+    /** The file exactly as read, for export; null when it was longer than MAX_STORED_FILE_CHARS. */
+    originalText: z
+      .string({ error: expecting('must be text') })
+      .max(MAX_STORED_FILE_CHARS, `must be at most ${MAX_STORED_FILE_CHARS} characters`)
+      .nullable(),
+  }),
+  grid: z.strictObject({
+    symmetry: z.enum(SYMMETRIES, { error: expecting(`must be one of ${SYMMETRIES.join(', ')}`) }),
+    /** γ from the axis, degrees, ascending within 0–180. */
+    verticalAnglesDeg: z
+      .array(z.number({ error: expecting('must be a number') }))
+      .max(MAX_VERTICAL_ANGLES, `may have at most ${MAX_VERTICAL_ANGLES} angles`),
+    /** Stored C planes, degrees, ascending. */
+    horizontalAnglesDeg: z
+      .array(z.number({ error: expecting('must be a number') }))
+      .max(MAX_HORIZONTAL_ANGLES, `may have at most ${MAX_HORIZONTAL_ANGLES} angles`),
+    /** Absolute cd at full, one row per stored C plane, one value per γ. */
+    candelaCd: z
+      .array(z.array(z.number({ error: expecting('must be a number') })))
+      .max(MAX_HORIZONTAL_ANGLES, `may have at most ${MAX_HORIZONTAL_ANGLES} rows`),
+  }),
+});
+
 export const FIXTURE_CATEGORIES = [
   'profile',
   'fresnel',
@@ -86,7 +133,7 @@ export const fixtureType = z.strictObject({
   category: z.enum(FIXTURE_CATEGORIES, {
     error: expecting(`must be one of ${FIXTURE_CATEGORIES.join(', ')}`),
   }),
-  photometry: z.discriminatedUnion('kind', [beamPhotometry, softPhotometry]),
+  photometry: z.discriminatedUnion('kind', [beamPhotometry, softPhotometry, measuredPhotometry]),
   /** Electrical load at full, W. */
   powerW: finite().min(0, 'must not be negative').max(100000, 'must be at most 100 000 W'),
   /** Weight of the unit as hung (without clamp and safety), kg. */
@@ -102,6 +149,7 @@ export const fixtureType = z.strictObject({
 export type FixtureType = z.infer<typeof fixtureType>;
 export type BeamPhotometry = z.infer<typeof beamPhotometry>;
 export type SoftPhotometry = z.infer<typeof softPhotometry>;
+export type MeasuredPhotometry = z.infer<typeof measuredPhotometry>;
 
 export interface RuleProblem {
   /** Path inside the checked item. */
@@ -111,6 +159,12 @@ export interface RuleProblem {
 
 /** The rules a fixture type must keep beyond field ranges: field wider than beam, a sane zoom. */
 export function fixtureTypeRuleProblems(type: FixtureType): RuleProblem[] {
+  if (type.photometry.kind === 'measured') {
+    return candelaGridProblems(type.photometry.grid).map((message) => ({
+      path: ['photometry', 'grid'],
+      message,
+    }));
+  }
   if (type.photometry.kind !== 'beam') return [];
   const problems: RuleProblem[] = [];
   const spread = type.photometry.spread;

@@ -74,7 +74,7 @@ describe('loading plot files', () => {
     [
       'an unknown photometry kind',
       (plot: any) => (plot.fixtureTypes[0].photometry.kind = 'laser'),
-      'fixtureTypes[0].photometry.kind: must be one of "beam", "soft"',
+      'fixtureTypes[0].photometry.kind: must be one of "beam", "soft", "measured"',
     ],
     [
       'a missing main viewpoint',
@@ -112,7 +112,9 @@ describe('loading plot files', () => {
     const { z } = await import('zod');
     const { readFileSync } = await import('node:fs');
     const generated = z.toJSONSchema(plotDocument, { io: 'input', unrepresentable: 'any' });
-    const committed = JSON.parse(readFileSync('public/schema/throwline-plot-v1.schema.json', 'utf8'));
+    const committed = JSON.parse(
+      readFileSync(`public/schema/throwline-plot-v${PLOT_VERSION}.schema.json`, 'utf8'),
+    );
     expect(committed).toEqual(JSON.parse(JSON.stringify(generated)));
   });
 });
@@ -128,12 +130,25 @@ describe('migrations', () => {
     expect(result.document.name).toBe('Tiny');
     expect(result.document.displayUnits).toBe('metric');
     expect(result.document.version).toBe(PLOT_VERSION);
-    expect(result.migrations).toEqual(['0 → 1: rename title → name; add displayUnits "metric"']);
+    expect(result.migrations).toEqual([
+      '0 → 1: rename title → name; add displayUnits "metric"',
+      '1 → 2: fixture types may carry measured photometry; existing files only change their version',
+    ]);
+  });
+
+  it('a version 1 file is read unchanged but for its version number', () => {
+    const current = tinyPlot();
+    const result = loadPlotText(JSON.stringify({ ...current, version: 1 }));
+    expect(result.ok).toBe(true);
+    if (!result.ok) return;
+    expect(result.document).toEqual(current);
+    expect(result.document.version).toBe(2);
+    expect(result.migrations).toHaveLength(1);
   });
 
   it('a file with no version is read as version 0', () => {
     const { version: _version, ...rest } = tinyPlot();
     const result = loadPlotText(JSON.stringify(rest));
-    expect(result.ok && result.migrations.length).toBe(1);
+    expect(result.ok && result.migrations.length).toBe(2);
   });
 });

@@ -1,0 +1,2 @@
+export * from './genericTypes';
+export * from './measuredType';
