@@ -1,6 +1,7 @@
 'use client';
 
 import { useState } from 'react';
+import { FixtureTypesButton } from '@/components/library/FixtureTypesButton';
 import { updateShow } from '@/lib/plot';
 import { useEditor } from './EditorContext';
 import type { Tool } from './tools';
@@ -81,6 +82,7 @@ export function Toolbar({
           'Click the plan to place a person to be lit',
         )}
         {toolButton('measure', 'Measure', { kind: 'measure' }, 'Drag to measure a distance on the plan')}
+        <FixtureTypesButton />
       </div>
       <div className="toolbar-group" aria-label="History">
         <button type="button" onClick={() => store.undo()} disabled={!store.canUndo()} title="Undo (Ctrl+Z)">
