@@ -1,26 +1,42 @@
 import { readFile } from 'node:fs/promises';
 import path from 'node:path';
-import { PlotEditor } from '@/components/editor/PlotEditor';
+import { type DemoChoice, StartPage } from '@/components/shows/StartPage';
+import { SignIn } from '@/components/shows/SignIn';
 import { loadPlotText } from '@/lib/plot';
+import { DEMO_FILES } from '@/lib/storage/seedDemos';
+import { getServerStore } from '@/lib/storage/serverStore';
+import { pageHasAccess } from './pageAccess';
 
-/** The demo a first visit opens: the studio theatre play. */
-const FIRST_DEMO = 'studio-theatre.json';
+export const runtime = 'nodejs';
+export const dynamic = 'force-dynamic';
 
-export default async function HomePage() {
-  const text = await readFile(path.join(process.cwd(), 'public', 'demo', FIRST_DEMO), 'utf8');
-  const loaded = loadPlotText(text);
-  if (!loaded.ok) {
-    return (
-      <main className="app-error">
-        <h1>Throwline</h1>
-        <p>The demo plot could not be opened:</p>
-        <ul>
-          {loaded.errors.map((line) => (
-            <li key={line}>{line}</li>
-          ))}
-        </ul>
-      </main>
-    );
+async function demoChoices(): Promise<DemoChoice[]> {
+  const choices: DemoChoice[] = [];
+  for (const file of [...DEMO_FILES].reverse()) {
+    try {
+      const loaded = loadPlotText(
+        await readFile(/*turbopackIgnore: true*/ path.join(process.cwd(), 'public', 'demo', file), 'utf8'),
+      );
+      if (loaded.ok) choices.push({ file, name: loaded.document.name });
+    } catch {
+      // A missing demo file is simply not offered.
+    }
   }
-  return <PlotEditor initialDocument={loaded.document} />;
+  return choices;
+}
+
+/** The start page: the shows on this server, new from a demo, import, and the bin. */
+export default async function HomePage({
+  searchParams,
+}: {
+  searchParams: Promise<Record<string, string | string[] | undefined>>;
+}) {
+  if (!(await pageHasAccess())) return <SignIn failed={(await searchParams).signin === 'failed'} />;
+  const store = await getServerStore();
+  const [shows, bin, demos] = await Promise.all([
+    store.listShows(),
+    store.listShows({ inBin: true }),
+    demoChoices(),
+  ]);
+  return <StartPage shows={shows} bin={bin} demos={demos} />;
 }

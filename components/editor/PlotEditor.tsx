@@ -8,6 +8,7 @@ import { ListsPanel } from '../panels/ListsPanel';
 import type { ViewTransform } from '../canvas/viewTransform';
 import { zoomAt } from '../canvas/viewTransform';
 import { EditorProvider, useEditor } from './EditorContext';
+import { ShowSaving } from './ShowSaving';
 import { Toolbar } from './Toolbar';
 import type { Tool } from './tools';
 import { useShortcuts } from './useShortcuts';
@@ -18,16 +19,22 @@ const PlanCanvas = dynamic(() => import('../canvas/PlanCanvas'), {
   loading: () => <div className="plan-canvas plan-canvas--loading">Drawing the plan…</div>,
 });
 
+/** A plot stored on the server: its show id and the revision the editor opens (it is autosaved). */
+export interface EditorShow {
+  readonly id: string;
+  readonly revision: number;
+}
+
 /** The whole editing screen for one plot. */
-export function PlotEditor({ initialDocument }: { initialDocument: PlotDocument }) {
+export function PlotEditor({ initialDocument, show }: { initialDocument: PlotDocument; show?: EditorShow }) {
   return (
     <EditorProvider initialDocument={initialDocument}>
-      <EditorLayout />
+      <EditorLayout show={show} />
     </EditorProvider>
   );
 }
 
-function EditorLayout() {
+function EditorLayout({ show }: { show?: EditorShow }) {
   const editor = useEditor();
   useShortcuts(editor);
   const [tool, setTool] = useState<Tool>({ kind: 'select' });
@@ -60,6 +67,7 @@ function EditorLayout() {
           showAllPools={showAllPools}
           onShowAllPoolsChange={setShowAllPools}
         />
+        {show ? <ShowSaving showId={show.id} revision={show.revision} /> : null}
       </header>
       <aside className="editor-lists" aria-label="Show lists">
         <ListsPanel />

@@ -4,6 +4,7 @@ import path from 'node:path';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { launchBrowser, recordPageProblems } from './support/browser';
+import { createShowFromDemo, showUrl } from './support/shows';
 
 const artifactsDir = path.resolve(import.meta.dirname, '..', '..', 'test-artifacts');
 const demo = JSON.parse(
@@ -13,6 +14,12 @@ const demo = JSON.parse(
   ),
 );
 const special = demo.fixtures.find((unit: { id: string }) => unit.id === 'fx-7');
+
+/** Open a fresh stored copy of the studio-theatre demo in the editor (edits are autosaved to it). */
+async function openStudioTheatre(page: Page): Promise<void> {
+  const id = await createShowFromDemo(inject('baseUrl'), 'studio-theatre.json');
+  await page.goto(showUrl(inject('baseUrl'), id), { waitUntil: 'load' });
+}
 
 let browser: Browser;
 beforeAll(async () => {
@@ -71,7 +78,7 @@ describe('editing the demo plot in a real browser', () => {
   it('drag a focus point: throw, pool and centre level follow the photometry; undo restores them', async () => {
     const page = await browser.newPage({ viewport: { width: 1440, height: 900 } });
     const problems = recordPageProblems(page);
-    await page.goto(inject('baseUrl'), { waitUntil: 'load' });
+    await openStudioTheatre(page);
     await page.getByTestId('plan-canvas').locator('canvas').first().waitFor({ state: 'visible' });
     const view = await planView(page);
 
@@ -146,7 +153,7 @@ describe('editing the demo plot in a real browser', () => {
   it('switching units shows feet and foot-candles; a bad value shows its message and changes nothing', async () => {
     const page = await browser.newPage({ viewport: { width: 1440, height: 900 } });
     const problems = recordPageProblems(page);
-    await page.goto(inject('baseUrl'), { waitUntil: 'load' });
+    await openStudioTheatre(page);
     await page.getByTestId('plan-canvas').locator('canvas').first().waitFor({ state: 'visible' });
     const view = await planView(page);
     const mountAt = toPage(view, special.mount);
@@ -183,7 +190,7 @@ describe('a first-time task: hang a unit and aim it at a performer', () => {
   it('hangs a unit on LX 3 with the next unit number, aims it at Ilse and shows its throw, pool and level', async () => {
     const page = await browser.newPage({ viewport: { width: 1440, height: 900 } });
     const problems = recordPageProblems(page);
-    await page.goto(inject('baseUrl'), { waitUntil: 'load' });
+    await openStudioTheatre(page);
     await page.getByTestId('plan-canvas').locator('canvas').first().waitFor({ state: 'visible' });
     const view = await planView(page);
     const lx3 = demo.positions.find((position: { id: string }) => position.id === 'pos-lx3');

@@ -1,7 +1,8 @@
-import { type ChildProcess, spawn, spawnSync } from 'node:child_process';
-import { createServer } from 'node:net';
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
 import path from 'node:path';
 import type { TestProject } from 'vitest/node';
+import { buildApp, freePort, host, startServer, stopServer } from './server';
 
 declare module 'vitest' {
   export interface ProvidedContext {
@@ -9,83 +10,20 @@ declare module 'vitest' {
   }
 }
 
-const repoRoot = path.resolve(import.meta.dirname, '..', '..', '..');
-const nextBin = path.join(repoRoot, 'node_modules', '.bin', 'next');
-const host = '127.0.0.1';
-const startupTimeoutMs = 60_000;
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const probe = createServer();
-    probe.unref();
-    probe.on('error', reject);
-    probe.listen(0, host, () => {
-      const address = probe.address();
-      if (address === null || typeof address === 'string') {
-        probe.close();
-        reject(new Error('could not read the probe port'));
-        return;
-      }
-      probe.close(() => resolve(address.port));
-    });
-  });
-}
-
-function buildApp(): void {
-  const result = spawnSync(nextBin, ['build'], { cwd: repoRoot, stdio: 'inherit', env: process.env });
-  if (result.status !== 0) {
-    throw new Error(`next build failed (exit ${result.status ?? result.signal})`);
-  }
-}
-
-async function waitUntilAnswering(baseUrl: string, server: ChildProcess): Promise<void> {
-  const deadline = Date.now() + startupTimeoutMs;
-  while (Date.now() < deadline) {
-    if (server.exitCode !== null || server.signalCode !== null) {
-      throw new Error(`next start exited early (exit ${server.exitCode ?? server.signalCode})`);
-    }
-    try {
-      const response = await fetch(baseUrl, { signal: AbortSignal.timeout(2_000) });
-      await response.body?.cancel();
-      return;
-    } catch {
-      await new Promise((resolve) => setTimeout(resolve, 250));
-    }
-  }
-  throw new Error(`next start did not answer at ${baseUrl} within ${startupTimeoutMs} ms`);
-}
-
-function stopServer(server: ChildProcess): Promise<void> {
-  if (server.exitCode !== null || server.signalCode !== null) return Promise.resolve();
-  return new Promise((resolve) => {
-    const forceKill = setTimeout(() => server.kill('SIGKILL'), 5_000);
-    server.once('exit', () => {
-      clearTimeout(forceKill);
-      resolve();
-    });
-    server.kill('SIGTERM');
-  });
-}
-
-/** Builds the app (unless THROWLINE_SKIP_BUILD=1), serves it on a free loopback port, provides its URL. */
+/**
+ * Builds the app (unless THROWLINE_SKIP_BUILD=1), serves it on a free loopback port with a fresh
+ * temporary show database (never a developer's own), provides its URL, and removes the database after.
+ */
 export default async function setup(project: TestProject): Promise<() => Promise<void>> {
   if (process.env.THROWLINE_SKIP_BUILD !== '1') buildApp();
 
+  const dataDir = mkdtempSync(path.join(tmpdir(), 'throwline-e2e-'));
   const port = await freePort();
-  const baseUrl = `http://${host}:${port}`;
-  const server = spawn(nextBin, ['start', '-H', host, '-p', String(port)], {
-    cwd: repoRoot,
-    stdio: ['ignore', 'inherit', 'inherit'],
-    env: { ...process.env, NEXT_TELEMETRY_DISABLED: '1' },
-  });
+  const server = await startServer(port, path.join(dataDir, 'throwline.db'));
 
-  try {
-    await waitUntilAnswering(baseUrl, server);
-  } catch (error) {
+  project.provide('baseUrl', `http://${host}:${port}`);
+  return async () => {
     await stopServer(server);
-    throw error;
-  }
-
-  project.provide('baseUrl', baseUrl);
-  return () => stopServer(server);
+    rmSync(dataDir, { recursive: true, force: true });
+  };
 }
