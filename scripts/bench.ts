@@ -2,15 +2,15 @@
  * Benchmarks (not tests): prints one JSON line per measurement with the median of repeated runs.
  * Run with `npm run bench`. The machine is shared and noisy, so compare medians and ratios.
  */
-import { beamIlluminanceLx, areaSourceIlluminanceLx, peakCandelaFromLumens } from '../lib/photometry';
+import {
+  type CoverageSpec,
+  type RigFixture,
+  bruteForceCoverage,
+  createCoverageEngine,
+  gridOver,
+} from '../lib/analysis';
+import { areaSourceIlluminanceLx, beamIlluminanceLx, peakCandelaFromLumens } from '../lib/photometry';
 import { footprintOnPlane, vec3 } from '../lib/geometry';
-
-interface Measurement {
-  readonly name: string;
-  readonly medianMs: number;
-  readonly runs: number;
-  readonly [extra: string]: unknown;
-}
 
 function median(values: number[]): number {
   const sorted = [...values].sort((a, b) => a - b);
@@ -18,61 +18,142 @@ function median(values: number[]): number {
   return sorted.length % 2 === 1 ? sorted[middle] : (sorted[middle - 1] + sorted[middle]) / 2;
 }
 
-function measure(
-  name: string,
-  runs: number,
-  work: () => unknown,
-  extra: Record<string, unknown> = {},
-): Measurement {
-  for (let warm = 0; warm < 3; warm += 1) work();
+function time(runs: number, work: () => unknown): number {
+  for (let warm = 0; warm < Math.min(3, runs); warm += 1) work();
   const times: number[] = [];
   for (let run = 0; run < runs; run += 1) {
     const start = performance.now();
     work();
     times.push(performance.now() - start);
   }
-  return { name, medianMs: Number(median(times).toFixed(4)), runs, ...extra };
+  return Number(median(times).toFixed(3));
 }
 
-const results: Measurement[] = [];
+function print(record: Record<string, unknown>): void {
+  console.log(JSON.stringify(record));
+}
 
-// One fixture over a 24 000-cell grid: 200 × 120 cells at 0.1 m (20 m × 12 m).
-const columns = 200;
-const rows = 120;
+/** A deterministic pseudo-random sequence (mulberry32), so every run benchmarks the same rigs. */
+function random(seed: number): () => number {
+  let state = seed >>> 0;
+  return () => {
+    state = (state + 0x6d2b79f5) >>> 0;
+    let t = state;
+    t = Math.imul(t ^ (t >>> 15), t | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+}
+
+/**
+ * An invented rig: units on five pipes over a 20 m × 12 m stage, each focused at face height within
+ * reach of its pipe (up to 50° from straight down, as front, top and back light are), on the stage.
+ */
+function rig(count: number, seed: number): RigFixture[] {
+  const next = random(seed);
+  const pipes = [-3, 0.5, 3.5, 6.5, 9.5];
+  // A catalogue of types: six beam angles, three field/beam ratios (spot, profile, wash-like).
+  const beams = [10, 14, 19, 26, 36, 50];
+  const ratios = [1.35, 1.5, 1.7];
+  return Array.from({ length: count }, (_, index) => {
+    const beam = beams[Math.floor(next() * beams.length)];
+    const ratio = ratios[Math.floor(next() * ratios.length)];
+    const mount = vec3(-9.5 + 19 * next(), pipes[index % pipes.length], 6.5 + next() * 1.5);
+    const reach = (mount.z - 1.6) * Math.tan((50 * Math.PI) / 180) * next();
+    const bearing = 2 * Math.PI * next();
+    const focus = vec3(
+      Math.min(9.5, Math.max(-9.5, mount.x + reach * Math.sin(bearing))),
+      Math.min(11.5, Math.max(0.5, mount.y + reach * Math.cos(bearing))),
+      1.6,
+    );
+    return {
+      id: `u${index}`,
+      mount,
+      focus,
+      source: {
+        kind: 'beam' as const,
+        spread: { kind: 'round' as const, beamAngleDeg: beam, fieldAngleDeg: beam * ratio },
+        peakCd: 10000 + 70000 * next(),
+      },
+    };
+  });
+}
+
+// Coverage: 200 × 120 cells of 0.1 m over 20 m × 12 m = 24 000 cells, horizontal at face height.
+const spec: CoverageSpec = {
+  grid: gridOver({ minX: -10, maxX: 10, minY: 0, maxY: 12 }, 0.1),
+  plane: { kind: 'horizontal', heightM: 1.6 },
+};
+const cells = spec.grid.columns * spec.grid.rows;
+for (const count of [50, 300, 1000]) {
+  const fixtures = rig(count, count);
+  const fullMs = time(count >= 1000 ? 7 : 15, () => createCoverageEngine(spec).update(fixtures));
+  const engine = createCoverageEngine(spec);
+  const culled = Float64Array.from(engine.update(fixtures).values);
+  let step = 0;
+  const incrementalMs = time(40, () => {
+    step += 1;
+    const moved = fixtures.map((fixture, index) =>
+      index === 0
+        ? { ...fixture, focus: vec3(fixture.focus.x + 0.01 * (step % 7), fixture.focus.y, 1.6) }
+        : fixture,
+    );
+    engine.update(moved);
+  });
+  let brute: Float64Array = new Float64Array(0);
+  const bruteMs = time(count >= 1000 ? 1 : 3, () => {
+    brute = bruteForceCoverage(spec, fixtures).values;
+  });
+  let maxRelative = 0;
+  for (let index = 0; index < cells; index += 1) {
+    if (brute[index] > 0.1)
+      maxRelative = Math.max(maxRelative, Math.abs(culled[index] - brute[index]) / brute[index]);
+  }
+  print({
+    name: 'coverage',
+    fixtures: count,
+    cells,
+    fullRecomputeMedianMs: fullMs,
+    incrementalMedianMs: incrementalMs,
+    bruteForceMedianMs: bruteMs,
+    speedupOverBruteForce: Number((bruteMs / fullMs).toFixed(1)),
+    maxRelativeDifference: maxRelative,
+    targets:
+      count === 300
+        ? { fullRecomputeMs: 16, incrementalMs: 2, speedup: 10, maxRelativeDifference: 1e-9 }
+        : undefined,
+  });
+}
+
+// Single evaluations of the photometry core.
 const mount = vec3(0, -3, 7);
-const axis = vec3(0, 6, -5.3);
 const spread = { kind: 'round', beamAngleDeg: 26, fieldAngleDeg: 40 } as const;
-const up = vec3(0, 0, 1);
-results.push(
-  measure(
-    'point-source beam, one fixture × 24 000 cells',
-    30,
-    () => {
-      let sum = 0;
-      for (let row = 0; row < rows; row += 1) {
-        for (let column = 0; column < columns; column += 1) {
-          const point = vec3(-10 + column * 0.1, row * 0.1, 1.6);
-          sum += beamIlluminanceLx({ mount, axis, peakCd: 30000, spread, point, normal: up });
-        }
-      }
-      return sum;
-    },
-    { cells: rows * columns },
-  ),
-);
-
-results.push(
-  measure('peak candela from lumens (one zoom step)', 200, () => peakCandelaFromLumens(12000, 19, 30)),
-);
-
-results.push(
-  measure('footprint on the focus plane (closed form + 96-point outline)', 500, () =>
-    footprintOnPlane(mount, vec3(0, 3, 1.6), 26, 1.6),
-  ),
-);
-
-results.push(
-  measure('soft box at 1.2 m, numerical area integral', 50, () =>
+print({
+  name: 'point-source beam at one point (exact profile)',
+  medianMsPer1000: time(50, () => {
+    for (let index = 0; index < 1000; index += 1) {
+      beamIlluminanceLx({
+        mount,
+        axis: vec3(0, 6, -5.3),
+        peakCd: 30000,
+        spread,
+        point: vec3(index * 0.001, 3, 1.6),
+        normal: vec3(0, 0, 1),
+      });
+    }
+  }),
+});
+print({
+  name: 'peak candela from lumens (one zoom step, memoised after the first)',
+  medianMs: time(200, () => peakCandelaFromLumens(12000, 19, 30)),
+});
+print({
+  name: 'footprint on the focus plane (closed form + 96-point outline)',
+  medianMs: time(500, () => footprintOnPlane(mount, vec3(0, 3, 1.6), 26, 1.6)),
+});
+print({
+  name: 'soft box 1.2 m from a face, numerical area integral',
+  medianMs: time(50, () =>
     areaSourceIlluminanceLx({
       shape: { kind: 'rectangle', widthM: 0.9, heightM: 1.2 },
       centre: vec3(1, -1, 1.7),
@@ -82,6 +163,4 @@ results.push(
       normal: vec3(0, -1, 0),
     }),
   ),
-);
-
-for (const result of results) console.log(JSON.stringify(result));
+});

@@ -1,5 +1,5 @@
 /**
- * Command-line report: `npm run report -- <file.json> [--json] [--units metric|imperial]`.
+ * Command-line report: `npm run report -- <file.json> [--json] [--units metric|imperial] [--target LUX]`.
  * Prints the focus figures of every fixture and the light on every face. Bad files print every
  * problem with its path and exit with status 1; bad arguments exit with status 2.
  */
@@ -8,7 +8,7 @@ import { buildReport, formatReportText, loadPlotText } from '../lib/plot';
 
 function usage(message: string): never {
   process.stderr.write(
-    `${message}\nUsage: npm run report -- <plot.json> [--json] [--units metric|imperial]\n`,
+    `${message}\nUsage: npm run report -- <plot.json> [--json] [--units metric|imperial] [--target LUX]\n`,
   );
   process.exit(2);
 }
@@ -17,6 +17,7 @@ const args = process.argv.slice(2);
 let file: string | null = null;
 let asJson = false;
 let units: 'metric' | 'imperial' | null = null;
+let targetLx: number | undefined;
 for (let index = 0; index < args.length; index += 1) {
   const arg = args[index];
   if (arg === '--json') asJson = true;
@@ -25,6 +26,11 @@ for (let index = 0; index < args.length; index += 1) {
     if (value !== 'metric' && value !== 'imperial')
       usage(`--units must be metric or imperial (got ${value ?? 'nothing'})`);
     units = value;
+  } else if (arg === '--target') {
+    const value = Number(args[(index += 1)]);
+    if (!(value > 0) || !Number.isFinite(value))
+      usage(`--target must be a level in lux above 0 (got ${args[index] ?? 'nothing'})`);
+    targetLx = value;
   } else if (arg.startsWith('--')) usage(`unknown option ${arg}`);
   else if (file === null) file = arg;
   else usage(`only one file at a time (got ${file} and ${arg})`);
@@ -47,7 +53,7 @@ if (!loaded.ok) {
   );
   process.exit(1);
 }
-const report = buildReport(loaded.document);
+const report = buildReport(loaded.document, { targetLx });
 process.stdout.write(
   asJson
     ? `${JSON.stringify(report, null, 2)}\n`

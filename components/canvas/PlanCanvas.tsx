@@ -17,7 +17,9 @@ import {
 import { formatLength } from '@/lib/units';
 import { useEditor } from '../editor/EditorContext';
 import type { Tool } from '../editor/tools';
+import type { CoverageResponse } from '@/lib/analysis';
 import { GridLayer } from './layers/GridLayer';
+import { LightMapLayer } from './layers/LightMapLayer';
 import { StageLayer } from './layers/StageLayer';
 import { PoolLayer } from './layers/PoolLayer';
 import { PositionLayer } from './layers/PositionLayer';
@@ -47,6 +49,9 @@ export interface PlanCanvasProps {
   /** Changes whenever the toolbar asks to fit the plot to the canvas. */
   readonly fitRequest: number;
   readonly showAllPools: boolean;
+  /** The light map to draw under the plot, or null. */
+  readonly lightMap: CoverageResponse | null;
+  readonly lightMapTargetLx: number;
 }
 
 type Drag =
@@ -70,6 +75,8 @@ export default function PlanCanvas({
   onCanvasSize,
   fitRequest,
   showAllPools,
+  lightMap,
+  lightMapTargetLx,
 }: PlanCanvasProps) {
   const editor = useEditor();
   const { document, derived, selection, store } = editor;
@@ -374,12 +381,25 @@ export default function PlanCanvas({
         onMouseLeave={() => hoverRef.current?.pointAt(null)}
         onWheel={onWheel}
       >
-        <GridLayer view={view} width={size.width} height={size.height} units={units} />
-        <StageLayer view={view} document={document} selection={selection} />
-        <PoolLayer view={view} units={derived.units} selection={selection} showAll={showAllPools} />
-        <PositionLayer view={view} document={document} selection={selection} />
-        <PeopleLayer view={view} document={document} selection={selection} />
-        <FixtureLayer view={view} units={derived.units} selection={selection} />
+        <Layer listening={false}>
+          <GridLayer view={view} width={size.width} height={size.height} units={units} />
+          {lightMap ? (
+            <LightMapLayer view={view} map={lightMap} targetLx={lightMapTargetLx} units={units} />
+          ) : null}
+          <StageLayer view={view} document={document} selection={selection} />
+          <PoolLayer
+            view={view}
+            units={derived.units}
+            selection={selection}
+            showAll={showAllPools}
+            outlineOnly={lightMap !== null}
+          />
+        </Layer>
+        <Layer>
+          <PositionLayer view={view} document={document} selection={selection} />
+          <PeopleLayer view={view} document={document} selection={selection} />
+          <FixtureLayer view={view} units={derived.units} selection={selection} />
+        </Layer>
         <Layer listening={false}>
           {drag?.kind === 'box' ? (
             <Rect

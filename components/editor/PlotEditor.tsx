@@ -6,7 +6,9 @@ import type { PlotDocument } from '@/lib/plot';
 import { Inspector } from '../panels/Inspector';
 import { ListsPanel } from '../panels/ListsPanel';
 import type { ViewTransform } from '../canvas/viewTransform';
-import { zoomAt } from '../canvas/viewTransform';
+import { fitView, zoomAt } from '../canvas/viewTransform';
+import { CoveragePanel } from '../coverage/CoveragePanel';
+import { useCoverageMap } from '../coverage/useCoverageMap';
 import { EditorProvider, useEditor } from './EditorContext';
 import { ShowSaving } from './ShowSaving';
 import { Toolbar } from './Toolbar';
@@ -42,6 +44,12 @@ function EditorLayout({ show }: { show?: EditorShow }) {
   const [fitRequest, setFitRequest] = useState(0);
   const [showAllPools, setShowAllPools] = useState(true);
   const [canvasSize, setCanvasSize] = useState({ width: 0, height: 0 });
+  const [sideTab, setSideTab] = useState<'item' | 'light'>('item');
+  const coverage = useCoverageMap(editor.document, editor.derived);
+  const openTab = (tab: 'item' | 'light') => {
+    setSideTab(tab);
+    coverage.setPanelOpen(tab === 'light');
+  };
   const zoom = useCallback(
     (factor: number) =>
       setView((current) =>
@@ -81,10 +89,50 @@ function EditorLayout({ show }: { show?: EditorShow }) {
           onCanvasSize={setCanvasSize}
           fitRequest={fitRequest}
           showAllPools={showAllPools}
+          lightMap={coverage.settings.visible ? coverage.map : null}
+          lightMapTargetLx={coverage.settings.targetLx}
         />
       </main>
-      <aside className="editor-inspector" aria-label="Selected item">
-        <Inspector />
+      <aside className="editor-inspector" aria-label={sideTab === 'item' ? 'Selected item' : 'Light map'}>
+        <div className="side-tabs" role="tablist" aria-label="Side panel">
+          <button type="button" role="tab" aria-selected={sideTab === 'item'} onClick={() => openTab('item')}>
+            Selected item
+          </button>
+          <button
+            type="button"
+            role="tab"
+            aria-selected={sideTab === 'light'}
+            onClick={() => openTab('light')}
+          >
+            Light map
+          </button>
+        </div>
+        {sideTab === 'item' ? (
+          <Inspector />
+        ) : (
+          <CoveragePanel
+            settings={coverage.settings}
+            onSettingsChange={coverage.setSettings}
+            status={coverage.status}
+            map={coverage.map}
+            onShowRegion={(region) => {
+              editor.select(region.fixtures.slice(0, 6).map((entry) => entry.fixtureId));
+              const margin = 1.5;
+              setView(
+                fitView(
+                  {
+                    minX: region.bounds.minX - margin,
+                    maxX: region.bounds.maxX + margin,
+                    minY: region.bounds.minY - margin,
+                    maxY: region.bounds.maxY + margin,
+                  },
+                  canvasSize.width,
+                  canvasSize.height,
+                ),
+              );
+            }}
+          />
+        )}
       </aside>
       <footer className="editor-status" role="status" aria-live="polite">
         {editor.message ?? statusHint(tool)}

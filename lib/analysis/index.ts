@@ -4,3 +4,4 @@ export * from './measuredSource';
 export * from './fixtureFocus';
 export * from './subjectLight';
 export * from './pointLight';
+export * from './coverage';

@@ -93,7 +93,11 @@ export function coneSectionOutline(input: ConeSectionInput): ConeSectionOutline 
   const landed = hits.map((hit) => hit !== undefined);
   const anyLanded = landed.some((flag) => flag);
   const allLanded = landed.every((flag) => flag);
-  const state: SectionState = allLanded ? 'closed' : anyLanded ? 'open' : 'misses';
+  // A cone reaches the plane if its axis or any edge ray does (a cap of directions that meets a
+  // hemisphere contains its centre or a point of its rim); with no edge landing but the axis landing,
+  // the light spreads over the whole plane.
+  const axisLands = dot(axis, towardPlane) > 1e-12;
+  const state: SectionState = allLanded ? 'closed' : anyLanded || axisLands ? 'open' : 'misses';
   // A closed outline is exact however far it reaches; an open one is clipped at reachM for drawing.
   const polygon = hits.map((hit, index) => {
     if (hit && (allLanded || length(subtract(hit, foot)) <= input.reachM)) return hit;

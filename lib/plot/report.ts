@@ -2,7 +2,7 @@
  * The plot report: the numbers a crew needs, per fixture and per subject, as plain data with stable
  * names (scripts and outside verification read them; keep them stable). SI units throughout.
  */
-import { fixtureFocus, subjectFaceLight } from '../analysis';
+import { createCoverageService, fixtureFocus, gridOver, subjectFaceLight } from '../analysis';
 import type { Footprint } from '../geometry';
 import type { PlotDocument } from './schema/document';
 import { mainViewpointPosition, resolveRig, subjectPlacements } from './resolve';
@@ -49,6 +49,42 @@ export interface ReportSubject {
   readonly sources: readonly { readonly fixtureId: string; readonly faceLx: number }[];
 }
 
+export interface ReportCoverage {
+  /** Horizontal plane at this height, m. */
+  readonly planeHeightM: number;
+  readonly spacingM: number;
+  readonly targetLx: number;
+  readonly toleranceStops: number;
+  readonly areas: readonly {
+    readonly id: string;
+    readonly name: string;
+    readonly minLx: number;
+    readonly averageLx: number;
+    readonly maxLx: number;
+    /** E min / E avg. */
+    readonly uniformityMinToAverage: number;
+    /** E min / E max. */
+    readonly uniformityMinToMax: number;
+    /** Share of the area within the target band, 0–1. */
+    readonly withinTarget: number;
+  }[];
+  readonly regions: readonly {
+    readonly kind: 'hot' | 'dark';
+    readonly reason: string;
+    readonly centre: { readonly x: number; readonly y: number };
+    readonly areaM2: number;
+    readonly extremeLx: number;
+    readonly fixtures: readonly { readonly fixtureId: string; readonly lx: number }[];
+  }[];
+}
+
+export interface ReportOptions {
+  /** Target level for the coverage figures, lx (default 500). */
+  readonly targetLx?: number;
+  /** Grid spacing for the coverage figures, m (default 0.1). */
+  readonly spacingM?: number;
+}
+
 export interface PlotReport {
   readonly show: string;
   readonly venue: string;
@@ -56,6 +92,7 @@ export interface PlotReport {
   readonly mainViewpoint: string | null;
   readonly fixtures: readonly ReportFixture[];
   readonly subjects: readonly ReportSubject[];
+  readonly coverage: ReportCoverage;
 }
 
 function reportFootprint(footprint: Footprint | null): ReportFootprint | null {
@@ -64,8 +101,61 @@ function reportFootprint(footprint: Footprint | null): ReportFootprint | null {
   return { open, state, nearM, farM, widthM, areaM2 };
 }
 
+/** Coverage on the focus plane over the stage: statistics per acting area and hot spots / dark gaps. */
+export function reportCoverage(document: PlotDocument, options: ReportOptions = {}): ReportCoverage {
+  const targetLx = options.targetLx ?? 500;
+  const spacingM = options.spacingM ?? 0.1;
+  const toleranceStops = 0.5;
+  const xs = document.stage.outline.map((point) => point.x);
+  const ys = document.stage.outline.map((point) => point.y);
+  const response = createCoverageService().handle({
+    spec: {
+      grid: gridOver(
+        { minX: Math.min(...xs), maxX: Math.max(...xs), minY: Math.min(...ys), maxY: Math.max(...ys) },
+        spacingM,
+      ),
+      plane: { kind: 'horizontal', heightM: document.focusPlaneHeightM },
+    },
+    fixtures: resolveRig(document),
+    stage: { id: 'stage', name: 'Whole stage', outline: document.stage.outline },
+    areas: document.stage.acting.map((area) => ({ id: area.id, name: area.name, outline: area.outline })),
+    band: { targetLx, toleranceStops },
+    rules: { hotStops: 1, darkStops: 1, maxOverlaps: 4, minimumAreaM2: 0.05 },
+  });
+  return {
+    planeHeightM: document.focusPlaneHeightM,
+    spacingM,
+    targetLx,
+    toleranceStops,
+    areas: response.statistics.flatMap((row) =>
+      row.figures
+        ? [
+            {
+              id: row.id,
+              name: row.name,
+              minLx: row.figures.minLx,
+              averageLx: row.figures.averageLx,
+              maxLx: row.figures.maxLx,
+              uniformityMinToAverage: row.figures.uniformityMinToAverage,
+              uniformityMinToMax: row.figures.uniformityMinToMax,
+              withinTarget: row.figures.withinTarget,
+            },
+          ]
+        : [],
+    ),
+    regions: response.regions.map((region) => ({
+      kind: region.kind,
+      reason: region.reason,
+      centre: region.centre,
+      areaM2: region.areaM2,
+      extremeLx: region.extremeLx,
+      fixtures: region.fixtures,
+    })),
+  };
+}
+
 /** Build the report of a valid document. */
-export function buildReport(document: PlotDocument): PlotReport {
+export function buildReport(document: PlotDocument, options: ReportOptions = {}): PlotReport {
   const rig = resolveRig(document);
   const rigById = new Map(rig.map((fixture) => [fixture.id, fixture]));
   const types = new Map(document.fixtureTypes.map((type) => [type.id, type]));
@@ -114,5 +204,6 @@ export function buildReport(document: PlotDocument): PlotReport {
     mainViewpoint: document.viewpoints.find((view) => view.id === document.mainViewpointId)?.name ?? null,
     fixtures,
     subjects,
+    coverage: reportCoverage(document, options),
   };
 }

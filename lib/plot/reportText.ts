@@ -94,6 +94,39 @@ export function formatReportText(report: PlotReport, units: DisplayUnits): strin
       );
     }
   }
+  const coverage = report.coverage;
+  lines.push('');
+  lines.push(
+    `COVERAGE (horizontal at ${length(coverage.planeHeightM, units)}, ${length(coverage.spacingM, units)} grid; target ${illuminance(coverage.targetLx, units)} ± ${coverage.toleranceStops} stop)`,
+  );
+  lines.push(
+    table([
+      ['Area', 'Min', 'Average', 'Max', 'U0', 'Min/max', 'On target'],
+      ...coverage.areas.map((area) => [
+        area.name,
+        illuminance(area.minLx, units),
+        illuminance(area.averageLx, units),
+        illuminance(area.maxLx, units),
+        area.uniformityMinToAverage.toFixed(2),
+        area.uniformityMinToMax.toFixed(2),
+        `${Math.round(area.withinTarget * 100)} %`,
+      ]),
+    ]),
+  );
+  lines.push('');
+  lines.push(
+    'HOT SPOTS AND DARK GAPS (over or under the target by more than 1 stop, or more than 4 beams at once)',
+  );
+  if (coverage.regions.length === 0) lines.push('  none');
+  for (const region of coverage.regions.slice(0, 40)) {
+    const causes = region.fixtures
+      .slice(0, 3)
+      .map((entry) => `${names.get(entry.fixtureId) ?? entry.fixtureId} ${illuminance(entry.lx, units)}`)
+      .join(', ');
+    lines.push(
+      `  ${region.kind === 'hot' ? 'hot' : 'dark'} (${region.reason}) at x ${length(region.centre.x, units)}, y ${length(region.centre.y, units)}: ${region.areaM2.toFixed(2)} m², ${region.kind === 'hot' ? 'peak' : 'lowest'} ${illuminance(region.extremeLx, units)}${causes ? `; ${causes}` : ''}`,
+    );
+  }
   return `${lines.join('\n')}\n`;
 }
 

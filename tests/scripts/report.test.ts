@@ -36,6 +36,8 @@ describe('npm run report', () => {
     expect(parsed.fixtures[0].throwM).toBeCloseTo(5.946427, 6);
     expect(parsed.subjects[0]).toMatchObject({ id: 'sub-1', name: 'Ada' });
     expect(parsed.subjects[0].sources[0].faceLx).toBeCloseTo(380.471, 3);
+    expect(parsed.coverage.areas[0]).toMatchObject({ id: 'stage', name: 'Whole stage' });
+    expect(parsed.coverage.targetLx).toBe(500);
   }, 30000);
 
   it('prints a text report in imperial units when asked', () => {

@@ -1,6 +1,6 @@
 'use client';
 
-import { Circle, Group, Layer, Line, Rect, Text } from 'react-konva';
+import { Circle, Group, Line, Rect, Text } from 'react-konva';
 import type { DerivedUnit } from '@/lib/plot';
 import { type ViewTransform, worldToScreen } from '../viewTransform';
 import { glyphOutline, glyphRotationDeg, unitColour } from '../glyphs';
@@ -23,7 +23,7 @@ export function FixtureLayer({
   selection: readonly string[];
 }) {
   return (
-    <Layer>
+    <Group>
       {units.map((unit) => {
         const { fixture } = unit;
         const selected = selection.includes(fixture.id);
@@ -104,6 +104,6 @@ export function FixtureLayer({
           </Group>
         );
       })}
-    </Layer>
+    </Group>
   );
 }

@@ -1,6 +1,6 @@
 'use client';
 
-import { Layer, Line, Text } from 'react-konva';
+import { Group, Line, Text } from 'react-konva';
 import { type ViewTransform, gridSpacingM, scaleBar, screenToWorld } from '../viewTransform';
 import { palette } from '../palette';
 
@@ -35,7 +35,7 @@ export function GridLayer({
   const bar = scaleBar(view.scale, units);
   const barPx = bar.lengthM * view.scale;
   return (
-    <Layer listening={false}>
+    <Group listening={false}>
       {lines}
       <Line points={[16, height - 18, 16 + barPx, height - 18]} stroke={palette.label} strokeWidth={2} />
       <Line points={[16, height - 23, 16, height - 13]} stroke={palette.label} strokeWidth={2} />
@@ -45,6 +45,6 @@ export function GridLayer({
         strokeWidth={2}
       />
       <Text x={20 + barPx} y={height - 25} text={bar.label} fontSize={12} fill={palette.label} />
-    </Layer>
+    </Group>
   );
 }

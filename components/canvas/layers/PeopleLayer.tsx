@@ -1,6 +1,6 @@
 'use client';
 
-import { Circle, Group, Layer, Line, RegularPolygon, Text } from 'react-konva';
+import { Circle, Group, Line, RegularPolygon, Text } from 'react-konva';
 import type { PlotDocument } from '@/lib/plot';
 import { type ViewTransform, worldToScreen } from '../viewTransform';
 import { palette } from '../palette';
@@ -19,7 +19,7 @@ export function PeopleLayer({
   selection: readonly string[];
 }) {
   return (
-    <Layer>
+    <Group>
       {document.viewpoints.map((viewpoint) => {
         const selected = selection.includes(viewpoint.id);
         const at = worldToScreen(view, viewpoint.position);
@@ -112,6 +112,6 @@ export function PeopleLayer({
           </Group>
         );
       })}
-    </Layer>
+    </Group>
   );
 }

@@ -1,6 +1,6 @@
 'use client';
 
-import { Layer, Line, Text } from 'react-konva';
+import { Group, Line, Text } from 'react-konva';
 import type { DerivedUnit } from '@/lib/plot';
 import type { Footprint } from '@/lib/geometry';
 import { type ViewTransform, screenPoints, worldToScreen } from '../viewTransform';
@@ -16,14 +16,17 @@ export function PoolLayer({
   units,
   selection,
   showAll,
+  outlineOnly = false,
 }: {
   view: ViewTransform;
   units: readonly DerivedUnit[];
   selection: readonly string[];
   showAll: boolean;
+  /** Draw edges only (no fill), e.g. over the light map. */
+  outlineOnly?: boolean;
 }) {
   return (
-    <Layer listening={false}>
+    <Group listening={false}>
       {units.map((unit) => {
         const selected = selection.includes(unit.fixture.id);
         if (!showAll && !selected) return null;
@@ -36,10 +39,11 @@ export function PoolLayer({
             field={unit.focus.fieldPool}
             colour={colour}
             strong={selected}
+            outlineOnly={outlineOnly}
           />
         );
       })}
-    </Layer>
+    </Group>
   );
 }
 
@@ -49,12 +53,14 @@ function PoolShapes({
   field,
   colour,
   strong,
+  outlineOnly,
 }: {
   view: ViewTransform;
   beam: Footprint | null;
   field: Footprint | null;
   colour: string;
   strong: boolean;
+  outlineOnly: boolean;
 }) {
   const shapes = [];
   // Field edges only for selected units: with every unit's field drawn the plan turns to noise.
@@ -78,7 +84,7 @@ function PoolShapes({
         points={screenPoints(view, beam.polygon)}
         closed
         // An open pool spills for tens of metres: outline it, never flood the plan with it.
-        fill={beam.open ? undefined : colour}
+        fill={beam.open || outlineOnly ? undefined : colour}
         opacity={strong ? 0.32 : beam.open ? 0.35 : 0.1}
         stroke={beam.open ? palette.open : colour}
         strokeWidth={strong ? 2 : 1}

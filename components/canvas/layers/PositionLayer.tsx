@@ -1,6 +1,6 @@
 'use client';
 
-import { Circle, Group, Layer, Line, Text } from 'react-konva';
+import { Circle, Group, Line, Text } from 'react-konva';
 import type { PlotDocument } from '@/lib/plot';
 import { formatLength } from '@/lib/units';
 import { type ViewTransform, worldToScreen } from '../viewTransform';
@@ -17,7 +17,7 @@ export function PositionLayer({
   selection: readonly string[];
 }) {
   return (
-    <Layer>
+    <Group>
       {document.positions.map((position) => {
         const selected = selection.includes(position.id);
         const colour = selected ? palette.selection : palette.position;
@@ -89,6 +89,6 @@ export function PositionLayer({
           </Group>
         );
       })}
-    </Layer>
+    </Group>
   );
 }

@@ -1,6 +1,6 @@
 'use client';
 
-import { Layer, Line, Text } from 'react-konva';
+import { Group, Line, Text } from 'react-konva';
 import type { PlotDocument } from '@/lib/plot';
 import { type ViewTransform, screenPoints, worldToScreen } from '../viewTransform';
 import { palette } from '../palette';
@@ -24,7 +24,7 @@ export function StageLayer({
   const centreTop = worldToScreen(view, { x: 0, y: maxY + 0.6 });
   const settingRight = worldToScreen(view, { x: maxX + 0.4, y: 0 });
   return (
-    <Layer listening={false}>
+    <Group listening={false}>
       <Line points={screenPoints(view, outline)} closed stroke={palette.outline} strokeWidth={2} />
       {document.stage.acting.map((area) => {
         const selected = selection.includes(area.id);
@@ -92,6 +92,6 @@ export function StageLayer({
         fontSize={12}
         fill={palette.settingLine}
       />
-    </Layer>
+    </Group>
   );
 }

@@ -271,3 +271,12 @@ describe('regressions: nearly vertical beams', () => {
     expect(pool.nearM).toBeCloseTo(-(pool.farM ?? 0), 15);
   });
 });
+
+describe('regressions: a cone as wide as a hemisphere', () => {
+  // A 90° half-angle straight down: no edge ray reaches the floor, yet the whole floor is lit. It was
+  // once reported as missing the floor (found by the coverage engine's brute-force comparison).
+  it('is open, not missing', () => {
+    const outline = beamOutlineOnPlane(vec3(0, 0, 4), vec3(0, 0, 0), () => Math.PI / 2, 0);
+    expect(outline.state).toBe('open');
+  });
+});

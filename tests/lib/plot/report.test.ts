@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { buildReport, formatReportText } from '@/lib/plot';
+import { beamIlluminanceLx } from '@/lib/photometry';
 import { tinyPlot, unit } from './tinyPlot';
 
 // The tiny plot by hand: unit at (0, −2, 6) aimed at a face at (0, 2, 1.6); 26°/40°, 20 000 cd.
@@ -76,5 +77,54 @@ describe('the report on a hand-computed plot', () => {
     expect(text).toContain('52.5 fc'); // 565.61 lx / 10.7639
     expect(text).not.toMatch(/NaN|undefined|Infinity/);
     expect(formatReportText(report, 'metric')).toContain('566 lx');
+  });
+});
+
+describe('the report’s coverage figures', () => {
+  it('gives each acting area its levels and finds the pool as a hot spot caused by the unit', () => {
+    const plot = tinyPlot({
+      stage: {
+        outline: tinyPlot().stage.outline,
+        acting: [
+          {
+            id: 'area-c',
+            name: 'Centre',
+            outline: [
+              { x: -1, y: 1 },
+              { x: 1, y: 1 },
+              { x: 1, y: 3 },
+              { x: -1, y: 3 },
+            ],
+          },
+        ],
+      },
+    });
+    const coverage = buildReport(plot, { targetLx: 100 }).coverage;
+    expect(coverage.areas.map((area) => area.name)).toEqual(['Whole stage', 'Centre']);
+    const centre = coverage.areas[1];
+    // Cross-check with the exact point-source function on the same 0.1 m cell centres inside the area.
+    let sum = 0;
+    let max = 0;
+    for (let row = 0; row < 60; row += 1) {
+      for (let column = 0; column < 80; column += 1) {
+        const x = -4 + (column + 0.5) * 0.1;
+        const y = (row + 0.5) * 0.1;
+        if (x < -1 || x > 1 || y < 1 || y > 3) continue;
+        const lux = beamIlluminanceLx({
+          mount: unit.mount,
+          axis: { x: 0, y: 4, z: -4.4 },
+          peakCd: 20000,
+          spread: { kind: 'round', beamAngleDeg: 26, fieldAngleDeg: 40 },
+          point: { x, y, z: 1.6 },
+          normal: { x: 0, y: 0, z: 1 },
+        });
+        sum += lux;
+        max = Math.max(max, lux);
+      }
+    }
+    expect(centre.averageLx).toBeCloseTo(sum / 400, 2);
+    expect(centre.maxLx).toBeCloseTo(max, 2);
+    expect(coverage.regions[0]).toMatchObject({ kind: 'hot', reason: 'over target' });
+    expect(coverage.regions[0].fixtures[0].fixtureId).toBe('fx-1');
   });
 });

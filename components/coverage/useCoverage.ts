@@ -1,0 +1,73 @@
+'use client';
+
+import { useEffect, useRef, useState } from 'react';
+import { type CoverageRequest, type CoverageResponse, createCoverageService } from '@/lib/analysis';
+
+export type CoverageStatus = { state: 'idle' } | { state: 'working' } | { state: 'ready'; response: CoverageResponse } | { state: 'error'; message: string };
+
+/**
+ * Runs coverage requests in a Web Worker, one at a time: while one is being computed only the newest
+ * request waits, so a drag never queues up stale work. Falls back to the main thread where Workers
+ * are missing.
+ */
+export function useCoverage(request: CoverageRequest | string | null): { status: CoverageStatus; last: CoverageResponse | null } {
+  const [status, setStatus] = useState<CoverageStatus>({ state: 'idle' });
+  const [last, setLast] = useState<CoverageResponse | null>(null);
+  const worker = useRef<Worker | null>(null);
+  const busy = useRef(false);
+  const waiting = useRef<CoverageRequest | null>(null);
+  const sequence = useRef(0);
+
+  useEffect(() => {
+    if (typeof Worker === 'undefined') return;
+    const instance = new Worker(new URL('./coverage.worker.ts', import.meta.url));
+    worker.current = instance;
+    instance.onmessage = (event: MessageEvent<{ sequence: number; response?: CoverageResponse; error?: string }>) => {
+      busy.current = false;
+      if (event.data.response) {
+        setLast(event.data.response);
+        setStatus({ state: 'ready', response: event.data.response });
+      } else setStatus({ state: 'error', message: event.data.error ?? 'The light map could not be computed.' });
+      const next = waiting.current;
+      waiting.current = null;
+      if (next) send(next);
+    };
+    const send = (next: CoverageRequest) => {
+      busy.current = true;
+      sequence.current += 1;
+      instance.postMessage({ sequence: sequence.current, request: next });
+    };
+    return () => {
+      instance.terminate();
+      worker.current = null;
+    };
+  }, []);
+
+  useEffect(() => {
+    if (request === null || typeof request === 'string') return;
+    if (!worker.current) {
+      // No Worker (an old browser or a test DOM): the same service on this thread, after this render.
+      void Promise.resolve().then(() => {
+        try {
+          const response = createCoverageService().handle(request);
+          setLast(response);
+          setStatus({ state: 'ready', response });
+        } catch (error) {
+          setStatus({ state: 'error', message: (error as Error).message });
+        }
+      });
+      return;
+    }
+    if (busy.current) {
+      waiting.current = request;
+      return;
+    }
+    busy.current = true;
+    sequence.current += 1;
+    worker.current.postMessage({ sequence: sequence.current, request });
+  }, [request]);
+
+  // A request that could not be made (a message instead) is shown as it is.
+  if (typeof request === 'string') return { status: { state: 'error', message: request }, last };
+  return { status, last };
+}

@@ -1,0 +1,296 @@
+/**
+ * Light from one fixture onto the cells of a coverage grid. Round beams use a tight loop with a
+ * tabulated profile and only visit the cells inside the beam's edge (the model emits nothing beyond
+ * it, so skipping them changes nothing); other sources are evaluated cell by cell with the exact
+ * functions. Soft sources use the Lambertian point-source form beyond 5 × their size (within ~1 %)
+ * and the area integral nearer.
+ */
+import { beamOutlineOnPlane } from '../../geometry/footprint';
+import { type Vec3, normalize, subtract, vec3 } from '../../geometry/vector';
+import { degToRad } from '../../numeric';
+import { largestDimensionM, PHOTOMETRIC_DISTANCE_FACTOR } from '../../photometry/areaSource';
+import { profileEdgeAngleRad, spreadHalfAnglesAt } from '../../photometry/beam';
+import { fixtureIlluminanceLx, hasNoAim } from '../fixtureLight';
+import type { RigFixture } from '../rig';
+import { type CoverageSpec, cellCentreX, cellCentreY } from './grid';
+import { type ProfileTable, profileTable } from './profileTable';
+
+/** The cells a source can reach: inclusive column and row ranges. */
+export interface CellRange {
+  readonly firstColumn: number;
+  readonly lastColumn: number;
+  readonly firstRow: number;
+  readonly lastRow: number;
+}
+
+export type PreparedSource =
+  | {
+      readonly kind: 'round';
+      readonly fixture: RigFixture;
+      readonly range: CellRange | null;
+      readonly axis: Vec3;
+      readonly peakCd: number;
+      readonly table: ProfileTable;
+    }
+  | { readonly kind: 'cellwise'; readonly fixture: RigFixture; readonly range: CellRange | null };
+
+/** Per-cell unit normals of the measuring surfaces (x, y components; z is 0 or the plane is horizontal). */
+export interface CellNormals {
+  readonly horizontal: boolean;
+  readonly x: Float64Array;
+  readonly y: Float64Array;
+}
+
+/** Normals for a coverage spec: up for a horizontal plane, toward the viewpoint in plan otherwise. */
+export function cellNormals(spec: CoverageSpec): CellNormals {
+  const { grid, plane } = spec;
+  const count = grid.columns * grid.rows;
+  const x = new Float64Array(plane.kind === 'toward' ? count : 0);
+  const y = new Float64Array(plane.kind === 'toward' ? count : 0);
+  if (plane.kind === 'toward') {
+    for (let row = 0; row < grid.rows; row += 1) {
+      for (let column = 0; column < grid.columns; column += 1) {
+        const index = row * grid.columns + column;
+        const dx = plane.viewpoint.x - cellCentreX(grid, column);
+        const dy = plane.viewpoint.y - cellCentreY(grid, row);
+        const length = Math.hypot(dx, dy);
+        x[index] = length > 1e-9 ? dx / length : 0;
+        y[index] = length > 1e-9 ? dy / length : 0;
+      }
+    }
+  }
+  return { horizontal: plane.kind === 'horizontal', x, y };
+}
+
+const WHOLE = (spec: CoverageSpec): CellRange => ({ firstColumn: 0, lastColumn: spec.grid.columns - 1, firstRow: 0, lastRow: spec.grid.rows - 1 });
+
+/** Cells inside a plan polygon's bounding box, widened by two cells; null when it misses the grid. */
+function rangeAround(spec: CoverageSpec, points: readonly { x: number; y: number }[]): CellRange | null {
+  const { grid } = spec;
+  let minX = Infinity;
+  let maxX = -Infinity;
+  let minY = Infinity;
+  let maxY = -Infinity;
+  for (const point of points) {
+    minX = Math.min(minX, point.x);
+    maxX = Math.max(maxX, point.x);
+    minY = Math.min(minY, point.y);
+    maxY = Math.max(maxY, point.y);
+  }
+  const firstColumn = Math.max(0, Math.floor((minX - grid.minX) / grid.spacingM) - 2);
+  const lastColumn = Math.min(grid.columns - 1, Math.ceil((maxX - grid.minX) / grid.spacingM) + 2);
+  const firstRow = Math.max(0, Math.floor((minY - grid.minY) / grid.spacingM) - 2);
+  const lastRow = Math.min(grid.rows - 1, Math.ceil((maxY - grid.minY) / grid.spacingM) + 2);
+  if (firstColumn > lastColumn || firstRow > lastRow) return null;
+  return { firstColumn, lastColumn, firstRow, lastRow };
+}
+
+/** The cells inside a beam's edge on the grid's plane (the whole grid if the edge does not close). */
+function beamRange(spec: CoverageSpec, fixture: RigFixture, halfAngleAt: (azimuth: number) => number): CellRange | null {
+  const outline = beamOutlineOnPlane(fixture.mount, fixture.focus, halfAngleAt, spec.plane.heightM, { segments: 96 });
+  switch (outline.state) {
+    case 'closed':
+      return rangeAround(spec, outline.polygon);
+    case 'misses':
+      return null;
+    default:
+      return WHOLE(spec);
+  }
+}
+
+/** Everything the kernel needs for one fixture, worked out once. */
+export function prepareSource(fixture: RigFixture, spec: CoverageSpec): PreparedSource {
+  if (hasNoAim(fixture)) return { kind: 'cellwise', fixture, range: null };
+  const source = fixture.source;
+  if (source.kind === 'beam') {
+    if (source.spread.kind === 'round') {
+      const beamHalf = degToRad(source.spread.beamAngleDeg / 2);
+      const fieldHalf = degToRad(source.spread.fieldAngleDeg / 2);
+      const edge = profileEdgeAngleRad(beamHalf, fieldHalf);
+      // Rows are culled one by one in the kernel (rowInterval), so the whole grid is the range here.
+      return {
+        kind: 'round',
+        fixture,
+        range: source.peakCd > 0 && edge > 0 ? WHOLE(spec) : null,
+        axis: normalize(subtract(fixture.focus, fixture.mount)),
+        peakCd: source.peakCd,
+        table: profileTable(beamHalf, fieldHalf),
+      };
+    }
+    const spread = source.spread;
+    const edgeAt = (azimuth: number) => {
+      const { beamHalfRad, fieldHalfRad } = spreadHalfAnglesAt(spread, azimuth);
+      return profileEdgeAngleRad(beamHalfRad, fieldHalfRad);
+    };
+    return { kind: 'cellwise', fixture, range: source.peakCd > 0 ? beamRange(spec, fixture, edgeAt) : null };
+  }
+  return { kind: 'cellwise', fixture, range: WHOLE(spec) };
+}
+
+export interface AccumulateTarget {
+  readonly values: Float64Array;
+  /** Per cell, how many beams (50 % contour) cover it. */
+  readonly overlaps: Uint16Array;
+}
+
+/**
+ * Add (sign +1) or take away (sign −1) one prepared source's light on every cell it reaches. With
+ * `cull` false every cell of the grid is evaluated (the brute-force reference).
+ */
+export function accumulateSource(
+  prepared: PreparedSource,
+  spec: CoverageSpec,
+  normals: CellNormals,
+  target: AccumulateTarget,
+  sign: 1 | -1,
+  cull = true,
+): void {
+  const range = cull ? prepared.range : WHOLE(spec);
+  if (!range) return;
+  if (prepared.kind === 'round') accumulateRound(prepared, spec, normals, target, sign, range, cull);
+  else accumulateCellwise(prepared.fixture, spec, normals, target, sign, range);
+}
+
+/**
+ * The x-interval (m, relative to the fixture) where a row line at (dy, dz) from the fixture lies
+ * inside the cone cos θ > cosEdge about `axis`, or null. A cone of half-angle below 90° is convex, so
+ * a line meets it in one interval: solve (a·d)² = cos²·|d|² for the boundaries and keep the piece
+ * with a·d > 0 whose points lie inside.
+ */
+export function rowInterval(axis: Vec3, cosEdge: number, dy: number, dz: number): [number, number] | null {
+  const k = axis.y * dy + axis.z * dz;
+  const m2 = dy * dy + dz * dz;
+  const c2 = cosEdge * cosEdge;
+  const qa = axis.x * axis.x - c2;
+  const qb = 2 * axis.x * k;
+  const qc = k * k - c2 * m2;
+  const inside = (x: number) => {
+    const along = axis.x * x + k;
+    return along > 0 && along * along > c2 * (x * x + m2);
+  };
+  const roots: number[] = [];
+  if (Math.abs(qa) < 1e-12) {
+    if (Math.abs(qb) > 1e-15) roots.push(-qc / qb);
+  } else {
+    const discriminant = qb * qb - 4 * qa * qc;
+    if (discriminant >= 0) {
+      const root = Math.sqrt(discriminant);
+      const q = -0.5 * (qb + (qb >= 0 ? root : -root));
+      if (q !== 0) roots.push(q / qa, qc / q);
+      else roots.push(0);
+    }
+  }
+  roots.sort((a, b) => a - b);
+  const edges = [-Infinity, ...roots, Infinity];
+  let low = Infinity;
+  let high = -Infinity;
+  for (let index = 0; index + 1 < edges.length; index += 1) {
+    const a = edges[index];
+    const b = edges[index + 1];
+    const probe = Number.isFinite(a) && Number.isFinite(b) ? (a + b) / 2 : Number.isFinite(a) ? a + 1 + Math.abs(a) : Number.isFinite(b) ? b - 1 - Math.abs(b) : 0;
+    if (inside(probe)) {
+      low = Math.min(low, a);
+      high = Math.max(high, b);
+    }
+  }
+  return low <= high ? [low, high] : null;
+}
+
+function accumulateRound(
+  prepared: Extract<PreparedSource, { kind: 'round' }>,
+  spec: CoverageSpec,
+  normals: CellNormals,
+  target: AccumulateTarget,
+  sign: 1 | -1,
+  range: CellRange,
+  cull: boolean,
+): void {
+  const { grid } = spec;
+  const { mount } = prepared.fixture;
+  const { axis, peakCd, table } = prepared;
+  const { cosEdge, inverseOneMinusCosEdge, values: profile, intervals } = table;
+  const dz = spec.plane.heightM - mount.z;
+  const values = target.values;
+  const overlaps = target.overlaps;
+  const spacing = grid.spacingM;
+  for (let row = range.firstRow; row <= range.lastRow; row += 1) {
+    const dy = grid.minY + (row + 0.5) * spacing - mount.y;
+    let firstColumn = range.firstColumn;
+    let lastColumn = range.lastColumn;
+    if (cull) {
+      // Visit only the cells of this row inside the beam's edge (one cell of margin for rounding).
+      const interval = rowInterval(axis, cosEdge, dy, dz);
+      if (!interval) continue;
+      const from = Math.floor((mount.x + interval[0] - grid.minX) / spacing - 0.5) - 1;
+      const to = Math.ceil((mount.x + interval[1] - grid.minX) / spacing - 0.5) + 1;
+      if (Number.isFinite(from)) firstColumn = Math.max(firstColumn, from);
+      if (Number.isFinite(to)) lastColumn = Math.min(lastColumn, to);
+    }
+    for (let column = firstColumn; column <= lastColumn; column += 1) {
+      const dx = grid.minX + (column + 0.5) * spacing - mount.x;
+      const distanceSquared = dx * dx + dy * dy + dz * dz;
+      if (distanceSquared < 1e-12) continue;
+      const inverseDistance = 1 / Math.sqrt(distanceSquared);
+      const cosOffAxis = (dx * axis.x + dy * axis.y + dz * axis.z) * inverseDistance;
+      // Culling skips cells beyond the edge at once; the brute-force reference evaluates them in full
+      // (the table gives 0 there), so both give the same numbers.
+      if (cull && cosOffAxis <= cosEdge) continue;
+      const index = row * grid.columns + column;
+      // Incidence: the direction from the cell back to the fixture is −(dx, dy, dz).
+      const cosIncidence = normals.horizontal
+        ? -dz * inverseDistance
+        : -(dx * normals.x[index] + dy * normals.y[index]) * inverseDistance;
+      if (cosIncidence <= 0) continue;
+      const position = Math.sqrt(Math.max(0, 1 - cosOffAxis) * inverseOneMinusCosEdge) * intervals;
+      const slot = Math.floor(position);
+      if (slot >= intervals) continue; // at or beyond the model's edge: no light
+      const low = profile[slot];
+      const relative = low + (profile[slot + 1] - low) * (position - slot);
+      values[index] += sign * peakCd * relative * cosIncidence * inverseDistance * inverseDistance;
+      if (relative >= 0.5) overlaps[index] += sign;
+    }
+  }
+}
+
+function accumulateCellwise(
+  fixture: RigFixture,
+  spec: CoverageSpec,
+  normals: CellNormals,
+  target: AccumulateTarget,
+  sign: 1 | -1,
+  range: CellRange,
+): void {
+  const { grid, plane } = spec;
+  const up = vec3(0, 0, 1);
+  for (let row = range.firstRow; row <= range.lastRow; row += 1) {
+    for (let column = range.firstColumn; column <= range.lastColumn; column += 1) {
+      const index = row * grid.columns + column;
+      const point = vec3(cellCentreX(grid, column), cellCentreY(grid, row), plane.heightM);
+      const normal = normals.horizontal ? up : vec3(normals.x[index], normals.y[index], 0);
+      if (!normals.horizontal && normal.x === 0 && normal.y === 0) continue;
+      const lux = cellwiseIlluminance(fixture, point, normal);
+      if (lux === 0) continue;
+      target.values[index] += sign * lux;
+    }
+  }
+}
+
+/** Exact light of any source at one cell; soft sources far away by their Lambertian point form. */
+export function cellwiseIlluminance(fixture: RigFixture, point: Vec3, normal: Vec3): number {
+  const source = fixture.source;
+  if (source.kind !== 'soft') return fixtureIlluminanceLx(fixture, point, normal);
+  const dx = point.x - fixture.mount.x;
+  const dy = point.y - fixture.mount.y;
+  const dz = point.z - fixture.mount.z;
+  const distance = Math.hypot(dx, dy, dz);
+  if (distance < PHOTOMETRIC_DISTANCE_FACTOR * largestDimensionM(source.shape)) {
+    return fixtureIlluminanceLx(fixture, point, normal);
+  }
+  const facing = normalize(subtract(fixture.focus, fixture.mount));
+  const cosEmit = (dx * facing.x + dy * facing.y + dz * facing.z) / distance;
+  const cosIncidence = -(dx * normal.x + dy * normal.y + dz * normal.z) / distance;
+  if (cosEmit <= 0 || cosIncidence <= 0) return 0;
+  const shape = source.shape;
+  const areaM2 = shape.kind === 'disc' ? Math.PI * shape.radiusM ** 2 : shape.widthM * shape.heightM;
+  return (source.luminanceCdPerM2 * areaM2 * cosEmit * cosIncidence) / (distance * distance);
+}
