@@ -151,49 +151,55 @@ export function accumulateSource(
   else accumulateCellwise(prepared.fixture, spec, normals, target, sign, range);
 }
 
+/** Whether x (along a row, relative to the fixture) is inside the cone: a·d > 0 and (a·d)² > cos²·|d|². */
+function insideCone(axisX: number, k: number, cosSquared: number, m2: number, x: number): boolean {
+  const along = axisX * x + k;
+  return along > 0 && along * along > cosSquared * (x * x + m2);
+}
+
 /**
  * The x-interval (m, relative to the fixture) where a row line at (dy, dz) from the fixture lies
- * inside the cone cos θ > cosEdge about `axis`, or null. A cone of half-angle below 90° is convex, so
- * a line meets it in one interval: solve (a·d)² = cos²·|d|² for the boundaries and keep the piece
- * with a·d > 0 whose points lie inside.
+ * inside the cone cos θ > cosEdge about `axis`, written to `out` as [low, high]; false if none. A cone
+ * of half-angle below 90° is convex, so a line meets it in one interval: the boundaries solve
+ * (a·d)² = cos²·|d|², and the pieces between them are tested for a·d > 0 and lying inside.
  */
-export function rowInterval(axis: Vec3, cosEdge: number, dy: number, dz: number): [number, number] | null {
+export function rowInterval(axis: Vec3, cosEdge: number, dy: number, dz: number, out: Float64Array): boolean {
   const k = axis.y * dy + axis.z * dz;
   const m2 = dy * dy + dz * dz;
   const c2 = cosEdge * cosEdge;
   const qa = axis.x * axis.x - c2;
   const qb = 2 * axis.x * k;
   const qc = k * k - c2 * m2;
-  const inside = (x: number) => {
-    const along = axis.x * x + k;
-    return along > 0 && along * along > c2 * (x * x + m2);
-  };
-  const roots: number[] = [];
+  let first = Number.NaN;
+  let second = Number.NaN;
   if (Math.abs(qa) < 1e-12) {
-    if (Math.abs(qb) > 1e-15) roots.push(-qc / qb);
+    if (Math.abs(qb) > 1e-15) first = -qc / qb;
   } else {
     const discriminant = qb * qb - 4 * qa * qc;
     if (discriminant >= 0) {
       const root = Math.sqrt(discriminant);
       const q = -0.5 * (qb + (qb >= 0 ? root : -root));
-      if (q !== 0) roots.push(q / qa, qc / q);
-      else roots.push(0);
+      if (q !== 0) {
+        first = Math.min(q / qa, qc / q);
+        second = Math.max(q / qa, qc / q);
+      } else first = 0;
     }
   }
-  roots.sort((a, b) => a - b);
-  const edges = [-Infinity, ...roots, Infinity];
-  let low = Infinity;
-  let high = -Infinity;
-  for (let index = 0; index + 1 < edges.length; index += 1) {
-    const a = edges[index];
-    const b = edges[index + 1];
-    const probe = Number.isFinite(a) && Number.isFinite(b) ? (a + b) / 2 : Number.isFinite(a) ? a + 1 + Math.abs(a) : Number.isFinite(b) ? b - 1 - Math.abs(b) : 0;
-    if (inside(probe)) {
-      low = Math.min(low, a);
-      high = Math.max(high, b);
-    }
+  if (Number.isNaN(first)) {
+    // No boundary: the row is wholly inside or wholly outside.
+    if (!insideCone(axis.x, k, c2, m2, 0)) return false;
+    out[0] = -Infinity;
+    out[1] = Infinity;
+    return true;
   }
-  return low <= high ? [low, high] : null;
+  const last = Number.isNaN(second) ? first : second;
+  const leftInside = insideCone(axis.x, k, c2, m2, first - 1 - Math.abs(first));
+  const middleInside = !Number.isNaN(second) && insideCone(axis.x, k, c2, m2, (first + second) / 2);
+  const rightInside = insideCone(axis.x, k, c2, m2, last + 1 + Math.abs(last));
+  if (!leftInside && !middleInside && !rightInside) return false;
+  out[0] = leftInside ? -Infinity : middleInside ? first : last;
+  out[1] = rightInside ? Infinity : middleInside ? last : first;
+  return true;
 }
 
 function accumulateRound(
@@ -213,36 +219,41 @@ function accumulateRound(
   const values = target.values;
   const overlaps = target.overlaps;
   const spacing = grid.spacingM;
+  const interval = new Float64Array(2);
+  const horizontal = normals.horizontal;
+  const normalX = normals.x;
+  const normalY = normals.y;
   for (let row = range.firstRow; row <= range.lastRow; row += 1) {
     const dy = grid.minY + (row + 0.5) * spacing - mount.y;
     let firstColumn = range.firstColumn;
     let lastColumn = range.lastColumn;
     if (cull) {
       // Visit only the cells of this row inside the beam's edge (one cell of margin for rounding).
-      const interval = rowInterval(axis, cosEdge, dy, dz);
-      if (!interval) continue;
+      if (!rowInterval(axis, cosEdge, dy, dz, interval)) continue;
       const from = Math.floor((mount.x + interval[0] - grid.minX) / spacing - 0.5) - 1;
       const to = Math.ceil((mount.x + interval[1] - grid.minX) / spacing - 0.5) + 1;
       if (Number.isFinite(from)) firstColumn = Math.max(firstColumn, from);
       if (Number.isFinite(to)) lastColumn = Math.min(lastColumn, to);
     }
+    const rowStart = row * grid.columns;
+    const dy2dz2 = dy * dy + dz * dz;
+    const alongRow = dy * axis.y + dz * axis.z;
     for (let column = firstColumn; column <= lastColumn; column += 1) {
       const dx = grid.minX + (column + 0.5) * spacing - mount.x;
-      const distanceSquared = dx * dx + dy * dy + dz * dz;
+      const distanceSquared = dx * dx + dy2dz2;
       if (distanceSquared < 1e-12) continue;
       const inverseDistance = 1 / Math.sqrt(distanceSquared);
-      const cosOffAxis = (dx * axis.x + dy * axis.y + dz * axis.z) * inverseDistance;
+      const cosOffAxis = (dx * axis.x + alongRow) * inverseDistance;
       // Culling skips cells beyond the edge at once; the brute-force reference evaluates them in full
       // (the table gives 0 there), so both give the same numbers.
       if (cull && cosOffAxis <= cosEdge) continue;
-      const index = row * grid.columns + column;
+      const index = rowStart + column;
       // Incidence: the direction from the cell back to the fixture is −(dx, dy, dz).
-      const cosIncidence = normals.horizontal
-        ? -dz * inverseDistance
-        : -(dx * normals.x[index] + dy * normals.y[index]) * inverseDistance;
+      const cosIncidence = horizontal ? -dz * inverseDistance : -(dx * normalX[index] + dy * normalY[index]) * inverseDistance;
       if (cosIncidence <= 0) continue;
-      const position = Math.sqrt(Math.max(0, 1 - cosOffAxis) * inverseOneMinusCosEdge) * intervals;
-      const slot = Math.floor(position);
+      const oneMinusCos = 1 - cosOffAxis;
+      const position = Math.sqrt(oneMinusCos > 0 ? oneMinusCos * inverseOneMinusCosEdge : 0) * intervals;
+      const slot = position | 0;
       if (slot >= intervals) continue; // at or beyond the model's edge: no light
       const low = profile[slot];
       const relative = low + (profile[slot + 1] - low) * (position - slot);
