@@ -10,6 +10,7 @@ const pureRingFiles = [
   'lib/analysis/**',
   'lib/formats/**',
   'lib/numeric.ts',
+  'lib/seededRandom.ts',
 ];
 
 const pureRingMessage =

@@ -11,6 +11,7 @@ import {
 } from '../lib/analysis';
 import { areaSourceIlluminanceLx, beamIlluminanceLx, peakCandelaFromLumens } from '../lib/photometry';
 import { footprintOnPlane, vec3 } from '../lib/geometry';
+import { seededRandom } from '../lib/seededRandom';
 
 function median(values: number[]): number {
   const sorted = [...values].sort((a, b) => a - b);
@@ -33,24 +34,12 @@ function print(record: Record<string, unknown>): void {
   console.log(JSON.stringify(record));
 }
 
-/** A deterministic pseudo-random sequence (mulberry32), so every run benchmarks the same rigs. */
-function random(seed: number): () => number {
-  let state = seed >>> 0;
-  return () => {
-    state = (state + 0x6d2b79f5) >>> 0;
-    let t = state;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
 /**
  * An invented rig: units on five pipes over a 20 m × 12 m stage, each focused at face height within
  * reach of its pipe (up to 50° from straight down, as front, top and back light are), on the stage.
  */
 function rig(count: number, seed: number): RigFixture[] {
-  const next = random(seed);
+  const next = seededRandom(seed);
   const pipes = [-3, 0.5, 3.5, 6.5, 9.5];
   // A catalogue of types: six beam angles, three field/beam ratios (spot, profile, wash-like).
   const beams = [10, 14, 19, 26, 36, 50];

@@ -46,9 +46,9 @@ export function findOrRefuse<T extends { id: string }>(items: T[], id: string, w
   return found;
 }
 
-/** A fresh id `prefix-N` with N one more than any id of that form in the document. */
-export function nextId(document: PlotDocument, prefix: string): string {
-  const all = [
+/** Every item with an id in the document (ids are unique across all of them). */
+function itemsWithIds(document: PlotDocument): readonly { readonly id: string }[] {
+  return [
     ...document.stage.acting,
     ...document.positions,
     ...document.fixtureTypes,
@@ -56,6 +56,11 @@ export function nextId(document: PlotDocument, prefix: string): string {
     ...document.subjects,
     ...document.viewpoints,
   ];
+}
+
+/** A fresh id `prefix-N` with N one more than any id of that form in the document. */
+export function nextId(document: PlotDocument, prefix: string): string {
+  const all = itemsWithIds(document);
   const pattern = new RegExp(`^${prefix.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}-(\\d+)$`);
   let highest = 0;
   for (const item of all) {
@@ -67,14 +72,6 @@ export function nextId(document: PlotDocument, prefix: string): string {
 
 /** Refuse when an id is already used anywhere in the document. */
 export function requireFreeId(document: PlotDocument, id: string): void {
-  const all = [
-    ...document.stage.acting,
-    ...document.positions,
-    ...document.fixtureTypes,
-    ...document.fixtures,
-    ...document.subjects,
-    ...document.viewpoints,
-  ];
-  if (all.some((item) => item.id === id))
+  if (itemsWithIds(document).some((item) => item.id === id))
     throw new CommandRefused(`The id "${id}" is already used in this plot.`);
 }

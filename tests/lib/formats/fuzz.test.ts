@@ -1,19 +1,8 @@
 import { describe, expect, it } from 'vitest';
+import { seededRandom } from '@/lib/seededRandom';
 import { PhotometryFileError, candelaGridProblems, readPhotometryFile } from '@/lib/formats';
 import { fixtureType, measuredTypeDraft } from '@/lib/plot';
 import { lambertian, oval, range, writeEulumdat, writeLm63 } from './synthetic';
-
-/** mulberry32: a small seeded generator, so every run mutates the same way. */
-function generator(seed: number): () => number {
-  let state = seed >>> 0;
-  return () => {
-    state = (state + 0x6d2b79f5) >>> 0;
-    let t = state;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 const SEEDS: { name: string; text: string }[] = [
   {
@@ -105,7 +94,7 @@ function mutate(text: string, random: () => number): string {
 
 describe('fuzzing the readers', () => {
   it('3000 mutated files from a fixed seed: only typed errors, never NaN, never a broken grid in the document', () => {
-    const random = generator(20261201);
+    const random = seededRandom(20261201);
     let read = 0;
     let refused = 0;
     for (let run = 0; run < 3000; run += 1) {

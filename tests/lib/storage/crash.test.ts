@@ -2,6 +2,7 @@ import { type ChildProcess, spawn } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
+import { seededRandom } from '@/lib/seededRandom';
 import Database from 'better-sqlite3';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { openSqliteShowStore } from '@/lib/storage/sqliteShowStore';
@@ -11,18 +12,6 @@ const repoRoot = path.resolve(import.meta.dirname, '..', '..', '..');
 const loopScript = path.join(import.meta.dirname, 'support', 'saveLoop.ts');
 const ROUNDS = 5;
 const ROUND_TIMEOUT_MS = 20_000;
-
-/** Small seeded generator (mulberry32) so the kill moments repeat from run to run. */
-function seededRandom(seed: number): () => number {
-  let state = seed >>> 0;
-  return () => {
-    state = (state + 0x6d2b79f5) >>> 0;
-    let t = state;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
 
 /** Run the save loop, kill it with SIGKILL `delayMs` after its first acknowledged save; the acks. */
 function runAndKill(file: string, showId: string, delayMs: number): Promise<number[]> {
