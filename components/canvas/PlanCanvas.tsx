@@ -2,7 +2,7 @@
 
 import type Konva from 'konva';
 import { useEffect, useRef, useState } from 'react';
-import { Layer, Line, Rect, Stage, Text } from 'react-konva';
+import { Layer, Stage } from 'react-konva';
 import {
   addSubject,
   aimFixture,
@@ -14,7 +14,6 @@ import {
   updateViewpoint,
   mainViewpointPosition,
 } from '@/lib/plot';
-import { formatLength } from '@/lib/units';
 import { useEditor } from '../editor/EditorContext';
 import type { Tool } from '../editor/tools';
 import type { CoverageResponse } from '@/lib/analysis';
@@ -25,8 +24,9 @@ import { PoolLayer } from './layers/PoolLayer';
 import { PositionLayer } from './layers/PositionLayer';
 import { FixtureLayer } from './layers/FixtureLayer';
 import { PeopleLayer } from './layers/PeopleLayer';
-import { palette } from './palette';
 import { HoverReadout, type HoverReadoutHandle } from './HoverReadout';
+import { GestureLayer } from './layers/GestureLayer';
+import { hangingPlacement, itemsInBox } from './hanging';
 import { planBounds } from './planBounds';
 import { useContainerSize } from './useContainerSize';
 import {
@@ -37,7 +37,6 @@ import {
   nearestOnSegment,
   panBy,
   screenToWorld,
-  worldToScreen,
   zoomAt,
 } from './viewTransform';
 
@@ -60,12 +59,6 @@ type Drag =
   | { kind: 'pan'; last: ScreenPoint }
   | { kind: 'box'; start: ScreenPoint; end: ScreenPoint; additive: boolean }
   | { kind: 'measure'; start: WorldPlanPoint; end: WorldPlanPoint };
-
-/** How close (px) a click must land to a position to hang a unit on it. */
-const HANG_REACH_PX = 16;
-
-/** How far below a pipe or truss a hung unit's lens sits, m (common practice: about half a metre). */
-const HANG_DROP_M = 0.4;
 
 /** The plan of the stage: draws the plot and turns pointer gestures into commands. */
 export default function PlanCanvas({
@@ -215,40 +208,14 @@ export default function PlanCanvas({
   };
 
   const hangAt = (world: WorldPlanPoint) => {
-    let best: { id: string; point: WorldPlanPoint; mountZ: number; distancePx: number } | null = null;
-    for (const position of document.positions) {
-      const near =
-        position.shape.kind === 'line'
-          ? nearestOnSegment(world, position.shape.start, position.shape.end)
-          : {
-              point: position.shape.at,
-              distanceM: Math.hypot(world.x - position.shape.at.x, world.y - position.shape.at.y),
-            };
-      const distancePx = near.distanceM * view.scale;
-      if (distancePx <= HANG_REACH_PX && (!best || distancePx < best.distancePx)) {
-        const underneath = position.kind === 'pipe' || position.kind === 'truss';
-        best = {
-          id: position.id,
-          point: near.point,
-          mountZ: position.heightM - (underneath ? HANG_DROP_M : 0),
-          distancePx,
-        };
-      }
-    }
-    if (!best || tool.kind !== 'hang') {
+    const placement =
+      tool.kind === 'hang' ? hangingPlacement(document, world, view.scale, tool.typeId) : null;
+    if (!placement) {
       editor.setMessage('Click on a position (a pipe, truss, boom or stand) to hang the unit there.');
       return;
     }
-    const focusZ = document.focusPlaneHeightM;
-    const rise = Math.max(best.mountZ - focusZ, 1);
-    const towardStage = best.point.y < 3 ? 1 : -1;
-    const result = editor.run(hangFixture, {
-      typeId: tool.typeId,
-      positionId: best.id,
-      mount: { x: best.point.x, y: best.point.y, z: best.mountZ },
-      // A first focus 45° down toward the middle of the stage; drag it where it belongs.
-      focus: { x: best.point.x, y: best.point.y + towardStage * rise, z: focusZ },
-    });
+    // The first focus is 45° down toward the middle of the stage; drag it where it belongs.
+    const result = editor.run(hangFixture, placement);
     if (result.ok) editor.select([store.getDocument().fixtures.at(-1)?.id ?? '']);
   };
 
@@ -326,15 +293,7 @@ export default function PlanCanvas({
     if (current.kind === 'box') {
       const a = screenToWorld(view, current.start);
       const b = screenToWorld(view, current.end);
-      const inside = (point: WorldPlanPoint) =>
-        point.x >= Math.min(a.x, b.x) &&
-        point.x <= Math.max(a.x, b.x) &&
-        point.y >= Math.min(a.y, b.y) &&
-        point.y <= Math.max(a.y, b.y);
-      const boxed = [
-        ...document.fixtures.filter((unit) => inside(unit.mount)).map((unit) => unit.id),
-        ...document.subjects.filter((person) => inside(person.mark)).map((person) => person.id),
-      ];
+      const boxed = itemsInBox(document, a, b);
       const moved = Math.hypot(current.end.x - current.start.x, current.end.y - current.start.y) > 3;
       if (moved) editor.select(current.additive ? [...new Set([...selection, ...boxed])] : boxed);
     } else if (current.kind !== 'pan' && current.kind !== 'measure') {
@@ -354,10 +313,6 @@ export default function PlanCanvas({
   };
 
   const units = document.displayUnits;
-  const measureLabel = measure
-    ? formatLength(Math.hypot(measure.end.x - measure.start.x, measure.end.y - measure.start.y), units)
-    : null;
-  const measureEnd = measure ? worldToScreen(view, measure.end) : null;
   const cursor = drag?.kind === 'pan' ? 'grabbing' : tool.kind === 'select' ? 'default' : 'crosshair';
 
   return (
@@ -400,36 +355,7 @@ export default function PlanCanvas({
           <PeopleLayer view={view} document={document} selection={selection} />
           <FixtureLayer view={view} units={derived.units} selection={selection} />
         </Layer>
-        <Layer listening={false}>
-          {drag?.kind === 'box' ? (
-            <Rect
-              x={Math.min(drag.start.x, drag.end.x)}
-              y={Math.min(drag.start.y, drag.end.y)}
-              width={Math.abs(drag.end.x - drag.start.x)}
-              height={Math.abs(drag.end.y - drag.start.y)}
-              stroke={palette.selection}
-              dash={[4, 3]}
-              fill="rgba(88,196,255,0.08)"
-            />
-          ) : null}
-          {measure && measureEnd ? (
-            <>
-              <Line
-                points={[...Object.values(worldToScreen(view, measure.start)), measureEnd.x, measureEnd.y]}
-                stroke={palette.measure}
-                strokeWidth={2}
-                dash={[6, 3]}
-              />
-              <Text
-                x={measureEnd.x + 8}
-                y={measureEnd.y - 8}
-                text={measureLabel ?? ''}
-                fontSize={13}
-                fill={palette.measure}
-              />
-            </>
-          ) : null}
-        </Layer>
+        <GestureLayer view={view} box={drag?.kind === 'box' ? drag : null} measure={measure} units={units} />
       </Stage>
       <HoverReadout
         handle={hoverRef}
