@@ -33,6 +33,7 @@ export function PositionInspector({ id }: { id: string }) {
   const label = fixtureLabeller(document);
   const weights = new Map(document.fixtureTypes.map((type) => [type.id, type.weightKg]));
   const hungKg = held.reduce((total, fixture) => total + (weights.get(fixture.typeId) ?? 0), 0);
+  const unknownWeights = held.filter((fixture) => !((weights.get(fixture.typeId) ?? 0) > 0)).length;
   const over = position.ratedLoadKg !== null && hungKg > position.ratedLoadKg;
   const shape = position.shape;
 
@@ -92,7 +93,17 @@ export function PositionInspector({ id }: { id: string }) {
         >
           Units&apos; own weight: {formatKg(hungKg)}
           {position.ratedLoadKg === null ? '' : ` of ${formatKg(position.ratedLoadKg)} rated`}
-          {over ? ': over its rating.' : '.'} Clamps, safeties and cable are not counted.
+          {over ? ': over its rating.' : '.'} Clamps, safeties and cable are not counted
+          {unknownWeights > 0
+            ? `, and ${unknownWeights} unit${unknownWeights === 1 ? "'s" : "s'"} weight is not known (0 kg)`
+            : ''}
+          ; the sum is set against the rating as one total, whether the rating is for a spread or a point
+          load.
+        </p>
+        <p className="panel-caution" role="note">
+          A planning figure, not a load calculation. What may hang on a position, and how, must be checked and
+          approved by a qualified rigger or the person responsible for the venue under local regulations;
+          every unit and accessory overhead needs its safety cable.
         </p>
       </PanelSection>
       <PanelSection title={`Units (${held.length})`}>

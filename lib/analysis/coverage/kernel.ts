@@ -3,12 +3,12 @@
  * tabulated profile and only visit the cells inside the beam's edge (the model emits nothing beyond
  * it, so skipping them changes nothing); other sources are evaluated cell by cell with the exact
  * functions. Soft sources use the Lambertian point-source form beyond 5 × their size (within ~1 %)
- * and the area integral nearer.
+ * and the area integral nearer (its coarse rule, within 1e-3).
  */
 import { beamOutlineOnPlane } from '../../geometry/footprint';
 import { type Vec3, normalize, subtract, vec3 } from '../../geometry/vector';
 import { degToRad } from '../../numeric';
-import { largestDimensionM, PHOTOMETRIC_DISTANCE_FACTOR } from '../../photometry/areaSource';
+import { areaSourceIlluminanceLx, largestDimensionM, PHOTOMETRIC_DISTANCE_FACTOR } from '../../photometry/areaSource';
 import { profileEdgeAngleRad, spreadHalfAnglesAt } from '../../photometry/beam';
 import { fixtureIlluminanceLx, hasNoAim } from '../fixtureLight';
 import type { RigFixture } from '../rig';
@@ -295,7 +295,18 @@ export function cellwiseIlluminance(fixture: RigFixture, point: Vec3, normal: Ve
   const dz = point.z - fixture.mount.z;
   const distance = Math.hypot(dx, dy, dz);
   if (distance < PHOTOMETRIC_DISTANCE_FACTOR * largestDimensionM(source.shape)) {
-    return fixtureIlluminanceLx(fixture, point, normal);
+    // Near the face: the area integral, with the coarser rule meant for maps (≤ 1e-3).
+    return areaSourceIlluminanceLx(
+      {
+        shape: source.shape,
+        centre: fixture.mount,
+        facing: subtract(fixture.focus, fixture.mount),
+        luminanceCdPerM2: source.luminanceCdPerM2,
+        point,
+        normal,
+      },
+      'coarse',
+    );
   }
   const facing = normalize(subtract(fixture.focus, fixture.mount));
   const cosEmit = (dx * facing.x + dy * facing.y + dz * facing.z) / distance;

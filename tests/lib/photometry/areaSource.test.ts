@@ -180,3 +180,38 @@ describe('soft source helpers', () => {
     expect(() => discSourceIlluminanceLx(100, 0.5, -1)).toThrow(/distance/);
   });
 });
+
+describe('the coarse rule for light maps', () => {
+  it('stays within 1e-3 of the closed forms from a quarter of the source size out', () => {
+    let worst = 0;
+    for (const height of [0.3, 0.5, 1, 2, 4]) {
+      for (const [x, y] of [
+        [0, 0],
+        [-0.45, 0.2],
+        [0.3, -0.25],
+      ]) {
+        const exact =
+          Math.PI *
+          1500 *
+          (cornerFactor(0.5 - x, 0.3 - y, height) +
+            cornerFactor(0.5 + x, 0.3 - y, height) +
+            cornerFactor(0.5 - x, 0.3 + y, height) +
+            cornerFactor(0.5 + x, 0.3 + y, height));
+        const coarse = areaSourceIlluminanceLx(
+          {
+            shape: { kind: 'rectangle', widthM: 1, heightM: 0.6 },
+            centre: vec3(0, 0, 0),
+            facing: up,
+            widthDirection: vec3(1, 0, 0),
+            luminanceCdPerM2: 1500,
+            point: vec3(x, y, height),
+            normal: down,
+          },
+          'coarse',
+        );
+        worst = Math.max(worst, Math.abs(coarse / exact - 1));
+      }
+    }
+    expect(worst).toBeLessThan(1e-3);
+  });
+});
