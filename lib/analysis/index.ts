@@ -4,4 +4,5 @@ export * from './measuredSource';
 export * from './fixtureFocus';
 export * from './subjectLight';
 export * from './pointLight';
+export * from './subjectLighting';
 export * from './coverage';

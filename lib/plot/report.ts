@@ -2,7 +2,13 @@
  * The plot report: the numbers a crew needs, per fixture and per subject, as plain data with stable
  * names (scripts and outside verification read them; keep them stable). SI units throughout.
  */
-import { createCoverageService, fixtureFocus, gridOver, subjectFaceLight } from '../analysis';
+import {
+  createCoverageService,
+  fixtureFocus,
+  gridOver,
+  subjectFaceLight,
+  subjectLighting,
+} from '../analysis';
 import type { Footprint } from '../geometry';
 import type { PlotDocument } from './schema/document';
 import { mainViewpointPosition, resolveRig, subjectPlacements } from './resolve';
@@ -47,6 +53,19 @@ export interface ReportSubject {
   readonly totalFaceLx: number;
   /** Every source's light on the face, largest first. */
   readonly sources: readonly { readonly fixtureId: string; readonly faceLx: number }[];
+  /** Each source's role on this subject (key, fill, back, side, top), by the rule in subjectLighting. */
+  readonly roles: readonly { readonly fixtureId: string; readonly role: string }[];
+  readonly keyLx: number;
+  readonly fillLx: number;
+  readonly backLightLx: number;
+  /** log2(key / fill), or null without fill. */
+  readonly keyToFillStops: number | null;
+  /** (key + fill) : fill as one number, or null without fill. */
+  readonly lightingRatio: number | null;
+  /** log2(back / key), or null. */
+  readonly backToKeyStops: number | null;
+  readonly cylindricalLx: number;
+  readonly semiCylindricalLx: number;
 }
 
 export interface ReportCoverage {
@@ -189,12 +208,22 @@ export function buildReport(document: PlotDocument, options: ReportOptions = {})
   const viewpoint = mainViewpointPosition(document);
   const subjects = subjectPlacements(document).map((placement, index): ReportSubject => {
     const light = subjectFaceLight(placement, viewpoint, rig);
+    const lighting = subjectLighting(placement, viewpoint, rig);
     return {
       id: placement.id,
       name: document.subjects[index].name,
       judgedToward: light.judgedToward,
       totalFaceLx: light.totalFaceLx,
       sources: light.sources,
+      roles: lighting.sources.map((source) => ({ fixtureId: source.fixtureId, role: source.role })),
+      keyLx: lighting.keyLx,
+      fillLx: lighting.fillLx,
+      backLightLx: lighting.backLightLx,
+      keyToFillStops: lighting.keyToFillStops,
+      lightingRatio: lighting.lightingRatio,
+      backToKeyStops: lighting.backToKeyStops,
+      cylindricalLx: lighting.totals.cylindricalLx,
+      semiCylindricalLx: lighting.totals.semiCylindricalLx,
     };
   });
   return {

@@ -88,9 +88,17 @@ export function formatReportText(report: PlotReport, units: DisplayUnits): strin
   lines.push(`LIGHT ON FACES (vertical, toward ${report.mainViewpoint ?? 'each subject’s facing'})`);
   for (const subject of report.subjects) {
     lines.push(`  ${subject.name}: ${illuminance(subject.totalFaceLx, units)} in all`);
+    const stops = (value: number | null) =>
+      value === null ? DASH : `${value >= 0 ? '+' : ''}${value.toFixed(2)} stops`;
+    lines.push(
+      `    key ${illuminance(subject.keyLx, units)}, fill ${illuminance(subject.fillLx, units)} (key:fill ${stops(subject.keyToFillStops)}; lighting ratio ${
+        subject.lightingRatio === null ? DASH : `${subject.lightingRatio.toFixed(1)}:1`
+      }), back ${illuminance(subject.backLightLx, units)} (${stops(subject.backToKeyStops)} from key); cylindrical ${illuminance(subject.cylindricalLx, units)}`,
+    );
+    const roles = new Map(subject.roles.map((entry) => [entry.fixtureId, entry.role]));
     for (const source of subject.sources.filter((entry) => entry.faceLx >= 0.5)) {
       lines.push(
-        `    ${(names.get(source.fixtureId) ?? source.fixtureId).padEnd(labelWidth)}  ${illuminance(source.faceLx, units)}`,
+        `    ${(names.get(source.fixtureId) ?? source.fixtureId).padEnd(labelWidth)}  ${illuminance(source.faceLx, units).padEnd(8)} ${roles.get(source.fixtureId) ?? ''}`,
       );
     }
   }
