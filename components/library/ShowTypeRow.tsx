@@ -6,6 +6,7 @@ import { useEditor } from '@/components/editor/EditorContext';
 import { outcomeOf } from '@/components/panels/format';
 import { type FixtureType, deleteFixtureType, duplicateFixtureType, updateFixtureType } from '@/lib/plot';
 import { assertNever } from '@/lib/numeric';
+import { TypePhotometryEditor } from './TypePhotometryEditor';
 
 function photometrySummary(type: FixtureType): string {
   const photometry = type.photometry;
@@ -36,7 +37,7 @@ function photometrySummary(type: FixtureType): string {
   }
 }
 
-/** One of the show's fixture types: its figures, its editable facts, duplicate and delete. */
+/** One of the show's fixture types: its figures, its editable facts and photometry, duplicate and delete. */
 export function ShowTypeRow({ type }: { type: FixtureType }) {
   const { document, run } = useEditor();
   const users = document.fixtures.filter((unit) => unit.typeId === type.id).length;
@@ -80,6 +81,7 @@ export function ShowTypeRow({ type }: { type: FixtureType }) {
             max={20000}
             onCommit={(colourTemperatureK) => edit({ colourTemperatureK })}
           />
+          <TypePhotometryEditor type={type} />
           <TextInput label="Notes" value={type.notes} multiline onCommit={(notes) => edit({ notes })} />
         </div>
       </details>

@@ -1,0 +1,431 @@
+'use client';
+
+import { LengthInput } from '@/components/inputs/LengthInput';
+import { NumberInput } from '@/components/inputs/NumberInput';
+import { SelectInput } from '@/components/inputs/SelectInput';
+import { TextInput } from '@/components/inputs/TextInput';
+import type { CommitOutcome } from '@/components/inputs/useFieldDraft';
+import { useEditor } from '@/components/editor/EditorContext';
+import {
+  type BeamPhotometry,
+  type FixtureType,
+  type MeasuredPhotometry,
+  type SoftPhotometry,
+  updateFixtureType,
+} from '@/lib/plot';
+import { assertNever } from '@/lib/numeric';
+import { beamSolidAngleSr } from '@/lib/photometry';
+import { MeasuredFigures } from './MeasuredFigures';
+
+type Spread = BeamPhotometry['spread'];
+type SoftShape = SoftPhotometry['shape'];
+
+/** What the schema's and the type rules' field names are called on screen. */
+const FIELD_LABELS: Record<string, string> = {
+  beamAngleDeg: 'Beam angle',
+  fieldAngleDeg: 'Field angle',
+  beamAngleXDeg: 'Beam angle X',
+  fieldAngleXDeg: 'Field angle X',
+  beamAngleYDeg: 'Beam angle Y',
+  fieldAngleYDeg: 'Field angle Y',
+  rotationDeg: 'Rotation',
+  peakCd: 'Peak intensity',
+  lumens: 'Output',
+  cdPerM2: 'Luminance',
+  minBeamDeg: 'Narrowest beam',
+  maxBeamDeg: 'Widest beam',
+  fieldPerBeam: 'Field/beam ratio',
+  lensOptionsDeg: 'Lens options',
+  radiusM: 'Radius',
+  widthM: 'Width',
+  heightM: 'Height',
+};
+
+/**
+ * A refusal from updateFixtureType in the words of the form: `fixture type type-3.photometry.spread.
+ * fieldAngleDeg: must be wider than the beam angle` becomes `Field angle must be wider than the beam
+ * angle.` Lines without a path are kept as they are.
+ */
+export function fieldMessage(message: string): string {
+  return message
+    .split('\n')
+    .map((line) => {
+      const match = /^fixture type [^.\s]+\.([\w.[\]]+): (.*)$/.exec(line);
+      if (!match) return line;
+      const lens = /lensOptionsDeg\[(\d+)\]$/.exec(match[1]);
+      const key =
+        match[1]
+          .replace(/\[\d+\]/g, '')
+          .split('.')
+          .at(-1) ?? '';
+      const label = lens ? `Lens ${Number(lens[1]) + 1}` : (FIELD_LABELS[key] ?? match[1]);
+      const text = match[2].replace(/\b(minBeamDeg|maxBeamDeg)\b/g, (name) =>
+        FIELD_LABELS[name].toLowerCase(),
+      );
+      return `${label} ${text}${text.endsWith('.') ? '' : '.'}`;
+    })
+    .join(' ');
+}
+
+/** Lens options as typed: angles separated by commas or spaces, "°" allowed; a message when one is not a number. */
+export function parseLensOptions(text: string): number[] | string {
+  const parts = text
+    .split(/[,;\s]+/)
+    .map((part) => part.replace(/°$/, ''))
+    .filter((part) => part !== '');
+  const values: number[] = [];
+  for (const part of parts) {
+    const value = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)$/.test(part) ? Number(part) : Number.NaN;
+    if (!Number.isFinite(value)) {
+      return `"${part}" is not an angle: list beam angles in degrees, e.g. 19, 26, 36.`;
+    }
+    values.push(value);
+  }
+  return values;
+}
+
+/** The emitting area of a soft source, m². */
+function softAreaM2(shape: SoftShape): number {
+  return shape.kind === 'disc' ? Math.PI * shape.radiusM ** 2 : shape.widthM * shape.heightM;
+}
+
+const ANGLE = { unit: '°', min: 0, max: 180, minExclusive: true, decimals: 2 } as const;
+
+/** The photometry of a show type, editable for beam and soft types, read-only for measured ones. */
+export function TypePhotometryEditor({ type }: { type: FixtureType }) {
+  const { run } = useEditor();
+  const photometry = type.photometry;
+  const commit = (next: FixtureType['photometry']): CommitOutcome => {
+    const result = run(updateFixtureType, { id: type.id, changes: { photometry: next } });
+    return result.ok ? null : fieldMessage(result.message);
+  };
+  switch (photometry.kind) {
+    case 'beam':
+      return <BeamFields photometry={photometry} commit={commit} />;
+    case 'soft':
+      return <SoftFields photometry={photometry} commit={commit} />;
+    case 'measured':
+      return <MeasuredFields photometry={photometry} />;
+    default:
+      return assertNever(photometry);
+  }
+}
+
+type Commit<P> = (next: P) => CommitOutcome;
+
+function BeamFields({ photometry, commit }: { photometry: BeamPhotometry; commit: Commit<BeamPhotometry> }) {
+  const { spread, output, zoom } = photometry;
+  const withSpread = (changes: Partial<Record<string, number>>) =>
+    commit({ ...photometry, spread: { ...spread, ...changes } as Spread });
+  const nominalBeam = spread.kind === 'round' ? spread.beamAngleDeg : spread.beamAngleXDeg;
+  const nominalField = spread.kind === 'round' ? spread.fieldAngleDeg : spread.fieldAngleXDeg;
+  return (
+    <fieldset className="type-photometry" data-photometry="beam">
+      <legend>Beam</legend>
+      <SelectInput
+        label="Beam shape"
+        value={spread.kind}
+        options={[
+          { value: 'round', label: 'Round' },
+          { value: 'oval', label: 'Oval (two axes)' },
+        ]}
+        hint="Round to oval starts with both axes equal; oval to round keeps the X axis."
+        onCommit={(kind) => {
+          if (kind === spread.kind) return null;
+          const next: Spread =
+            kind === 'oval'
+              ? {
+                  kind: 'oval',
+                  beamAngleXDeg: nominalBeam,
+                  fieldAngleXDeg: nominalField,
+                  beamAngleYDeg: nominalBeam,
+                  fieldAngleYDeg: nominalField,
+                  rotationDeg: 0,
+                }
+              : { kind: 'round', beamAngleDeg: nominalBeam, fieldAngleDeg: nominalField };
+          return commit({ ...photometry, spread: next });
+        }}
+      />
+      {spread.kind === 'round' ? (
+        <div className="panel-pair">
+          <NumberInput
+            label="Beam angle"
+            {...ANGLE}
+            value={spread.beamAngleDeg}
+            hint="To 50 % of the peak."
+            onCommit={(beamAngleDeg) => withSpread({ beamAngleDeg })}
+          />
+          <NumberInput
+            label="Field angle"
+            {...ANGLE}
+            value={spread.fieldAngleDeg}
+            hint="To 10 % of the peak."
+            onCommit={(fieldAngleDeg) => withSpread({ fieldAngleDeg })}
+          />
+        </div>
+      ) : (
+        <>
+          <div className="panel-pair">
+            <NumberInput
+              label="Beam angle X"
+              {...ANGLE}
+              value={spread.beamAngleXDeg}
+              onCommit={(beamAngleXDeg) => withSpread({ beamAngleXDeg })}
+            />
+            <NumberInput
+              label="Field angle X"
+              {...ANGLE}
+              value={spread.fieldAngleXDeg}
+              onCommit={(fieldAngleXDeg) => withSpread({ fieldAngleXDeg })}
+            />
+          </div>
+          <div className="panel-pair">
+            <NumberInput
+              label="Beam angle Y"
+              {...ANGLE}
+              value={spread.beamAngleYDeg}
+              onCommit={(beamAngleYDeg) => withSpread({ beamAngleYDeg })}
+            />
+            <NumberInput
+              label="Field angle Y"
+              {...ANGLE}
+              value={spread.fieldAngleYDeg}
+              onCommit={(fieldAngleYDeg) => withSpread({ fieldAngleYDeg })}
+            />
+          </div>
+          <NumberInput
+            label="Rotation"
+            unit="°"
+            min={-180}
+            max={180}
+            decimals={1}
+            value={spread.rotationDeg}
+            hint="Of the X axis, counter-clockwise."
+            onCommit={(rotationDeg) => withSpread({ rotationDeg })}
+          />
+        </>
+      )}
+
+      <SelectInput
+        label="Output given as"
+        value={output.kind}
+        options={[
+          { value: 'peak', label: 'Peak intensity (cd)' },
+          { value: 'lumens', label: 'Lumens (lm)' },
+        ]}
+        hint="Switching converts through the beam's solid angle, so the light stays the same."
+        onCommit={(kind) => {
+          if (kind === output.kind) return null;
+          const solidAngleSr = beamSolidAngleSr(spread);
+          return commit({
+            ...photometry,
+            output:
+              output.kind === 'peak'
+                ? { kind: 'lumens', lumens: output.peakCd * solidAngleSr }
+                : { kind: 'peak', peakCd: output.lumens / solidAngleSr },
+          });
+        }}
+      />
+      {output.kind === 'peak' ? (
+        <NumberInput
+          label="Peak intensity"
+          unit="cd"
+          min={0}
+          max={1e8}
+          minExclusive
+          decimals={0}
+          value={output.peakCd}
+          hint="At full, at the nominal spread."
+          onCommit={(peakCd) => commit({ ...photometry, output: { kind: 'peak', peakCd } })}
+        />
+      ) : (
+        <NumberInput
+          label="Output"
+          unit="lm"
+          min={0}
+          max={1e7}
+          minExclusive
+          decimals={0}
+          value={output.lumens}
+          hint="Total at full; kept across the zoom."
+          onCommit={(lumens) => commit({ ...photometry, output: { kind: 'lumens', lumens } })}
+        />
+      )}
+
+      <SelectInput
+        label="Zoom"
+        value={zoom ? 'zoom' : 'none'}
+        options={[
+          { value: 'none', label: 'None (fixed angle)' },
+          { value: 'zoom', label: 'Zoom range' },
+        ]}
+        hint="A new range starts at the nominal beam; then set its narrowest and widest beam."
+        onCommit={(kind) => {
+          if ((kind === 'zoom') === (zoom !== null)) return null;
+          return commit({
+            ...photometry,
+            zoom:
+              kind === 'zoom'
+                ? {
+                    minBeamDeg: nominalBeam,
+                    maxBeamDeg: nominalBeam,
+                    fieldPerBeam: nominalField / nominalBeam,
+                  }
+                : null,
+          });
+        }}
+      />
+      {zoom ? (
+        <>
+          <div className="panel-pair">
+            <NumberInput
+              label="Narrowest beam"
+              {...ANGLE}
+              value={zoom.minBeamDeg}
+              onCommit={(minBeamDeg) => commit({ ...photometry, zoom: { ...zoom, minBeamDeg } })}
+            />
+            <NumberInput
+              label="Widest beam"
+              {...ANGLE}
+              value={zoom.maxBeamDeg}
+              onCommit={(maxBeamDeg) => commit({ ...photometry, zoom: { ...zoom, maxBeamDeg } })}
+            />
+          </div>
+          <NumberInput
+            label="Field/beam ratio"
+            min={1}
+            max={10}
+            minExclusive
+            decimals={3}
+            value={zoom.fieldPerBeam}
+            hint="Field angle over beam angle across the zoom (typically 1.3–1.8)."
+            onCommit={(fieldPerBeam) => commit({ ...photometry, zoom: { ...zoom, fieldPerBeam } })}
+          />
+        </>
+      ) : null}
+
+      <TextInput
+        label="Lens options"
+        value={photometry.lensOptionsDeg.map((angle) => `${angle}°`).join(', ')}
+        placeholder="e.g. 19, 26, 36, 50"
+        hint="Beam angles of interchangeable lens tubes, for the lens picker; empty for none."
+        onCommit={(text) => {
+          const lensOptionsDeg = parseLensOptions(text);
+          return typeof lensOptionsDeg === 'string'
+            ? lensOptionsDeg
+            : commit({ ...photometry, lensOptionsDeg });
+        }}
+      />
+    </fieldset>
+  );
+}
+
+function SoftFields({ photometry, commit }: { photometry: SoftPhotometry; commit: Commit<SoftPhotometry> }) {
+  const { document } = useEditor();
+  const units = document.displayUnits;
+  const { shape, output } = photometry;
+  return (
+    <fieldset className="type-photometry" data-photometry="soft">
+      <legend>Soft source</legend>
+      <SelectInput
+        label="Shape"
+        value={shape.kind}
+        options={[
+          { value: 'disc', label: 'Disc' },
+          { value: 'rectangle', label: 'Rectangle' },
+        ]}
+        hint="Switching keeps the emitting area (a disc becomes a square)."
+        onCommit={(kind) => {
+          if (kind === shape.kind) return null;
+          const areaM2 = softAreaM2(shape);
+          const next: SoftShape =
+            kind === 'disc'
+              ? { kind: 'disc', radiusM: Math.sqrt(areaM2 / Math.PI) }
+              : { kind: 'rectangle', widthM: Math.sqrt(areaM2), heightM: Math.sqrt(areaM2) };
+          return commit({ ...photometry, shape: next });
+        }}
+      />
+      {shape.kind === 'disc' ? (
+        <LengthInput
+          label="Diameter"
+          valueM={shape.radiusM * 2}
+          units={units}
+          onCommit={(diameterM) => commit({ ...photometry, shape: { kind: 'disc', radiusM: diameterM / 2 } })}
+        />
+      ) : (
+        <div className="panel-pair">
+          <LengthInput
+            label="Width"
+            valueM={shape.widthM}
+            units={units}
+            onCommit={(widthM) => commit({ ...photometry, shape: { ...shape, widthM } })}
+          />
+          <LengthInput
+            label="Height"
+            valueM={shape.heightM}
+            units={units}
+            onCommit={(heightM) => commit({ ...photometry, shape: { ...shape, heightM } })}
+          />
+        </div>
+      )}
+      <SelectInput
+        label="Output given as"
+        value={output.kind}
+        options={[
+          { value: 'luminance', label: 'Luminance (cd/m²)' },
+          { value: 'lumens', label: 'Lumens (lm)' },
+        ]}
+        hint="Switching converts by Φ = π·L·A, so the light stays the same."
+        onCommit={(kind) => {
+          if (kind === output.kind) return null;
+          const areaM2 = softAreaM2(shape);
+          return commit({
+            ...photometry,
+            output:
+              output.kind === 'luminance'
+                ? { kind: 'lumens', lumens: Math.PI * output.cdPerM2 * areaM2 }
+                : { kind: 'luminance', cdPerM2: output.lumens / (Math.PI * areaM2) },
+          });
+        }}
+      />
+      {output.kind === 'luminance' ? (
+        <NumberInput
+          label="Luminance"
+          unit="cd/m²"
+          min={0}
+          max={1e9}
+          minExclusive
+          decimals={0}
+          value={output.cdPerM2}
+          hint="Of the face at full."
+          onCommit={(cdPerM2) => commit({ ...photometry, output: { kind: 'luminance', cdPerM2 } })}
+        />
+      ) : (
+        <NumberInput
+          label="Output"
+          unit="lm"
+          min={0}
+          max={1e7}
+          minExclusive
+          decimals={0}
+          value={output.lumens}
+          hint="Total at full, from the face."
+          onCommit={(lumens) => commit({ ...photometry, output: { kind: 'lumens', lumens } })}
+        />
+      )}
+    </fieldset>
+  );
+}
+
+function MeasuredFields({ photometry }: { photometry: MeasuredPhotometry }) {
+  return (
+    <fieldset className="type-photometry" data-photometry="measured">
+      <legend>Measured photometry</legend>
+      <p className="panel-note">
+        From {photometry.file.fileName}. Its figures come from the candela grid and cannot be edited here;
+        import a new file to change them.
+      </p>
+      <MeasuredFigures grid={photometry.grid} />
+    </fieldset>
+  );
+}
