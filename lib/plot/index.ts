@@ -10,4 +10,5 @@ export * from './resolve';
 export * from './derive';
 export * from './library';
 export * from './report';
+export * from './cameraExposure';
 export * from './reportText';

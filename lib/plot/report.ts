@@ -12,6 +12,7 @@ import {
 import type { Footprint } from '../geometry';
 import type { PlotDocument } from './schema/document';
 import { mainViewpointPosition, resolveRig, subjectPlacements } from './resolve';
+import { type SubjectExposure, subjectExposure } from './cameraExposure';
 
 export interface ReportFootprint {
   readonly open: boolean;
@@ -66,6 +67,8 @@ export interface ReportSubject {
   readonly backToKeyStops: number | null;
   readonly cylindricalLx: number;
   readonly semiCylindricalLx: number;
+  /** When the main viewpoint is a camera: what it needs and how the key light sits against it. */
+  readonly exposure: SubjectExposure | null;
 }
 
 export interface ReportCoverage {
@@ -206,6 +209,7 @@ export function buildReport(document: PlotDocument, options: ReportOptions = {})
     ];
   });
   const viewpoint = mainViewpointPosition(document);
+  const camera = document.viewpoints.find((view) => view.id === document.mainViewpointId)?.camera ?? null;
   const subjects = subjectPlacements(document).map((placement, index): ReportSubject => {
     const light = subjectFaceLight(placement, viewpoint, rig);
     const lighting = subjectLighting(placement, viewpoint, rig);
@@ -224,6 +228,7 @@ export function buildReport(document: PlotDocument, options: ReportOptions = {})
       backToKeyStops: lighting.backToKeyStops,
       cylindricalLx: lighting.totals.cylindricalLx,
       semiCylindricalLx: lighting.totals.semiCylindricalLx,
+      exposure: camera ? subjectExposure(camera, lighting.keyLx) : null,
     };
   });
   return {

@@ -95,6 +95,16 @@ export function formatReportText(report: PlotReport, units: DisplayUnits): strin
         subject.lightingRatio === null ? DASH : `${subject.lightingRatio.toFixed(1)}:1`
       }), back ${illuminance(subject.backLightLx, units)} (${stops(subject.backToKeyStops)} from key); cylindrical ${illuminance(subject.cylindricalLx, units)}`,
     );
+    if (subject.exposure) {
+      const exposure = subject.exposure;
+      lines.push(
+        `    camera needs ${illuminance(exposure.neededLx, units)} for a normal exposure; key side ${stops(exposure.keyStops)}${
+          exposure.markedFNumberForKey === null
+            ? ''
+            : `, about f/${exposure.markedFNumberForKey} at this ISO and shutter`
+        }`,
+      );
+    }
     const roles = new Map(subject.roles.map((entry) => [entry.fixtureId, entry.role]));
     for (const source of subject.sources.filter((entry) => entry.faceLx >= 0.5)) {
       lines.push(
