@@ -10,13 +10,14 @@ export function Readout({
 }: {
   name: string;
   label: string;
-  value: number;
+  /** null (no figure) leaves data-value empty; the text says why. */
+  value: number | null;
   text: string;
 }) {
   return (
     <div className="panel-readout">
       <dt>{label}</dt>
-      <dd data-readout={name} data-value={String(value)}>
+      <dd data-readout={name} data-value={value === null || !Number.isFinite(value) ? '' : String(value)}>
         {text}
       </dd>
     </div>

@@ -8,11 +8,12 @@ import { type Subject, deleteSubjects, moveSubject, updateSubject } from '@/lib/
 import { formatLength } from '@/lib/units';
 import { PanelSection } from './PanelSection';
 import { PointFields } from './PointFields';
+import { SubjectLightFigures } from './SubjectLightFigures';
 import { outcomeOf } from './format';
 
 /** A person to be lit: their mark, face height and which way they face. */
 export function SubjectInspector({ id }: { id: string }) {
-  const { document, run, select, units } = useEditor();
+  const { document, derived, run, select, units } = useEditor();
   const subject = document.subjects.find((candidate) => candidate.id === id);
   if (!subject) return null;
   const edit = (changes: Partial<Omit<Subject, 'id'>>) => outcomeOf(run(updateSubject, { id, changes }));
@@ -48,6 +49,7 @@ export function SubjectInspector({ id }: { id: string }) {
           onCommit={(facingDeg) => edit({ facingDeg })}
         />
       </PanelSection>
+      <SubjectLightFigures subjectId={id} document={document} derived={derived} units={units} />
       <PanelSection title="Notes">
         <TextInput label="Notes" value={subject.notes} multiline onCommit={(notes) => edit({ notes })} />
         <button

@@ -1,0 +1,125 @@
+'use client';
+
+import { useMemo } from 'react';
+import { subjectLighting } from '@/lib/analysis';
+import { type PlotDocument, type DerivedPlot, mainViewpointPosition, subjectExposure } from '@/lib/plot';
+import { formatIlluminance } from '@/lib/units';
+import { Readout } from './Readout';
+import { PanelSection } from './PanelSection';
+
+const ROLE_NAMES = { key: 'key', fill: 'fill', back: 'back', side: 'side', top: 'top' } as const;
+
+function stopsText(value: number | null): string {
+  return value === null ? '—' : `${value >= 0 ? '+' : ''}${value.toFixed(2)} stops`;
+}
+
+/** The light on one subject from every source, with roles, ratios and (for a camera) exposure. */
+export function SubjectLightFigures({
+  subjectId,
+  document,
+  derived,
+  units,
+}: {
+  subjectId: string;
+  document: PlotDocument;
+  derived: DerivedPlot;
+  units: 'metric' | 'imperial';
+}) {
+  const subject = document.subjects.find((candidate) => candidate.id === subjectId);
+  const viewpoint = document.viewpoints.find((view) => view.id === document.mainViewpointId) ?? null;
+  const lighting = useMemo(
+    () => (subject ? subjectLighting(subject, mainViewpointPosition(document), derived.rig) : null),
+    [subject, document, derived],
+  );
+  if (!subject || !lighting) return null;
+  const exposure = viewpoint?.camera ? subjectExposure(viewpoint.camera, lighting.keyLx) : null;
+  const names = new Map(
+    derived.units.map((unit) => {
+      const position = document.positions.find((item) => item.id === unit.fixture.positionId);
+      return [unit.fixture.id, position ? `${position.name} #${unit.fixture.unit ?? '?'}` : unit.fixture.id];
+    }),
+  );
+  const lit = lighting.sources.filter(
+    (source) => source.faceLx >= 0.5 || source.backLx >= 0.5 || source.topLx >= 0.5,
+  );
+  const largest = Math.max(
+    1e-9,
+    ...lit.map((source) => Math.max(source.faceLx, source.backLx, source.topLx)),
+  );
+  return (
+    <PanelSection title={`Light on the face, toward ${viewpoint ? viewpoint.name : 'the way they face'}`}>
+      <dl className="panel-readouts">
+        <Readout
+          name="subjectFace"
+          label="On the face"
+          value={lighting.totals.faceLx}
+          text={formatIlluminance(lighting.totals.faceLx, units)}
+        />
+        <Readout
+          name="subjectKey"
+          label="Key side"
+          value={lighting.keyLx}
+          text={formatIlluminance(lighting.keyLx, units)}
+        />
+        <Readout
+          name="subjectFill"
+          label="Fill side"
+          value={lighting.fillLx}
+          text={formatIlluminance(lighting.fillLx, units)}
+        />
+        <Readout
+          name="keyToFillStops"
+          label="Key : fill"
+          value={lighting.keyToFillStops}
+          text={
+            lighting.keyToFillStops === null
+              ? 'no fill'
+              : `${stopsText(lighting.keyToFillStops)} (lighting ratio ${(lighting.lightingRatio ?? 0).toFixed(1)}:1)`
+          }
+        />
+        <Readout
+          name="backToKeyStops"
+          label="Back : key"
+          value={lighting.backToKeyStops}
+          text={stopsText(lighting.backToKeyStops)}
+        />
+        <Readout
+          name="cylindrical"
+          label="Cylindrical"
+          value={lighting.totals.cylindricalLx}
+          text={formatIlluminance(lighting.totals.cylindricalLx, units)}
+        />
+        {exposure ? (
+          <Readout
+            name="keyExposureStops"
+            label={`Against ${viewpoint?.name ?? 'the camera'}`}
+            value={exposure.keyStops}
+            text={`needs ${formatIlluminance(exposure.neededLx, units)}; key side ${stopsText(exposure.keyStops)}${
+              exposure.markedFNumberForKey === null ? '' : `, about f/${exposure.markedFNumberForKey}`
+            }`}
+          />
+        ) : null}
+      </dl>
+      <p className="panel-note">
+        Lighting ratio is the photographers&apos; (key + fill) : fill. Roles come from where each unit is:
+        more than 70° up is top; behind (beyond 110° from the view) is back; 70–110° is side; in front, the
+        brightest is the key and its side is the key side.
+      </p>
+      <ul className="subject-bars" aria-label="Light on this subject by unit">
+        {lit.map((source) => {
+          const value =
+            source.role === 'back' ? source.backLx : source.role === 'top' ? source.topLx : source.faceLx;
+          return (
+            <li key={source.fixtureId}>
+              <span className="subject-bar-label">
+                {names.get(source.fixtureId) ?? source.fixtureId} <em>{ROLE_NAMES[source.role]}</em>
+              </span>
+              <span className="subject-bar" style={{ width: `${Math.max(2, (100 * value) / largest)}%` }} />
+              <span className="subject-bar-value">{formatIlluminance(value, units)}</span>
+            </li>
+          );
+        })}
+      </ul>
+    </PanelSection>
+  );
+}
