@@ -15,6 +15,7 @@ import {
 } from '@/lib/plot';
 import { assertNever } from '@/lib/numeric';
 import { beamSolidAngleSr } from '@/lib/photometry';
+import { ExportOriginalFile } from './ExportOriginalFile';
 import { MeasuredFigures } from './MeasuredFigures';
 
 type Spread = BeamPhotometry['spread'];
@@ -426,6 +427,7 @@ function MeasuredFields({ photometry }: { photometry: MeasuredPhotometry }) {
         import a new file to change them.
       </p>
       <MeasuredFigures grid={photometry.grid} />
+      <ExportOriginalFile file={photometry.file} />
     </fieldset>
   );
 }
