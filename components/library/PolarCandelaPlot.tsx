@@ -5,7 +5,7 @@ import { type CandelaGrid, polarCurves } from '@/lib/formats';
 
 const SIZE = 240;
 const RADIUS = 100;
-const COLOURS = ['#d9480f', '#1c7ed6'];
+const COLOURS = ['#ff7a3d', '#4dabf7'];
 
 /**
  * A polar candela plot as data sheets draw it: nadir down, intensity as distance from the centre
