@@ -39,13 +39,11 @@ export function SubjectLightFigures({
       return [unit.fixture.id, position ? `${position.name} #${unit.fixture.unit ?? '?'}` : unit.fixture.id];
     }),
   );
-  const lit = lighting.sources.filter(
-    (source) => source.faceLx >= 0.5 || source.backLx >= 0.5 || source.topLx >= 0.5,
-  );
-  const largest = Math.max(
-    1e-9,
-    ...lit.map((source) => Math.max(source.faceLx, source.backLx, source.topLx)),
-  );
+  // Each unit's light where its role puts it: back light on the back of the head, top light from above.
+  const shown = (source: (typeof lighting.sources)[number]) =>
+    source.role === 'back' ? source.backLx : source.role === 'top' ? source.topLx : source.faceLx;
+  const lit = lighting.sources.filter((source) => shown(source) >= 0.5).sort((a, b) => shown(b) - shown(a));
+  const largest = Math.max(1e-9, ...lit.map(shown));
   return (
     <PanelSection title={`Light on the face, toward ${viewpoint ? viewpoint.name : 'the way they face'}`}>
       <dl className="panel-readouts">
@@ -67,6 +65,8 @@ export function SubjectLightFigures({
           value={lighting.fillLx}
           text={formatIlluminance(lighting.fillLx, units)}
         />
+      </dl>
+      <dl className="panel-readouts panel-readouts--stacked">
         <Readout
           name="keyToFillStops"
           label="Key : fill"
@@ -92,7 +92,7 @@ export function SubjectLightFigures({
         {exposure ? (
           <Readout
             name="keyExposureStops"
-            label={`Against ${viewpoint?.name ?? 'the camera'}`}
+            label={`Exposure for ${viewpoint?.name ?? 'the camera'}`}
             value={exposure.keyStops}
             text={`needs ${formatIlluminance(exposure.neededLx, units)}; key side ${stopsText(exposure.keyStops)}${
               exposure.markedFNumberForKey === null ? '' : `, about f/${exposure.markedFNumberForKey}`
@@ -107,8 +107,7 @@ export function SubjectLightFigures({
       </p>
       <ul className="subject-bars" aria-label="Light on this subject by unit">
         {lit.map((source) => {
-          const value =
-            source.role === 'back' ? source.backLx : source.role === 'top' ? source.topLx : source.faceLx;
+          const value = shown(source);
           return (
             <li key={source.fixtureId}>
               <span className="subject-bar-label">
