@@ -1,6 +1,5 @@
 'use client';
 
-import { LengthInput } from '@/components/inputs/LengthInput';
 import { NumberInput } from '@/components/inputs/NumberInput';
 import { SelectInput } from '@/components/inputs/SelectInput';
 import { TextInput } from '@/components/inputs/TextInput';
@@ -10,16 +9,16 @@ import {
   type BeamPhotometry,
   type FixtureType,
   type MeasuredPhotometry,
-  type SoftPhotometry,
   updateFixtureType,
 } from '@/lib/plot';
 import { assertNever } from '@/lib/numeric';
 import { beamSolidAngleSr } from '@/lib/photometry';
 import { ExportOriginalFile } from './ExportOriginalFile';
 import { MeasuredFigures } from './MeasuredFigures';
+import { SoftFields } from './SoftPhotometryFields';
+import { type Commit } from './photometryFields';
 
 type Spread = BeamPhotometry['spread'];
-type SoftShape = SoftPhotometry['shape'];
 
 /** What the schema's and the type rules' field names are called on screen. */
 const FIELD_LABELS: Record<string, string> = {
@@ -85,11 +84,6 @@ export function parseLensOptions(text: string): number[] | string {
   return values;
 }
 
-/** The emitting area of a soft source, m². */
-function softAreaM2(shape: SoftShape): number {
-  return shape.kind === 'disc' ? Math.PI * shape.radiusM ** 2 : shape.widthM * shape.heightM;
-}
-
 const ANGLE = { unit: '°', min: 0, max: 180, minExclusive: true, decimals: 2 } as const;
 
 /** The photometry of a show type, editable for beam and soft types, read-only for measured ones. */
@@ -111,8 +105,6 @@ export function TypePhotometryEditor({ type }: { type: FixtureType }) {
       return assertNever(photometry);
   }
 }
-
-type Commit<P> = (next: P) => CommitOutcome;
 
 function BeamFields({ photometry, commit }: { photometry: BeamPhotometry; commit: Commit<BeamPhotometry> }) {
   const { spread, output, zoom } = photometry;
@@ -317,103 +309,6 @@ function BeamFields({ photometry, commit }: { photometry: BeamPhotometry; commit
             : commit({ ...photometry, lensOptionsDeg });
         }}
       />
-    </fieldset>
-  );
-}
-
-function SoftFields({ photometry, commit }: { photometry: SoftPhotometry; commit: Commit<SoftPhotometry> }) {
-  const { document } = useEditor();
-  const units = document.displayUnits;
-  const { shape, output } = photometry;
-  return (
-    <fieldset className="type-photometry" data-photometry="soft">
-      <legend>Soft source</legend>
-      <SelectInput
-        label="Shape"
-        value={shape.kind}
-        options={[
-          { value: 'disc', label: 'Disc' },
-          { value: 'rectangle', label: 'Rectangle' },
-        ]}
-        hint="Switching keeps the emitting area (a disc becomes a square)."
-        onCommit={(kind) => {
-          if (kind === shape.kind) return null;
-          const areaM2 = softAreaM2(shape);
-          const next: SoftShape =
-            kind === 'disc'
-              ? { kind: 'disc', radiusM: Math.sqrt(areaM2 / Math.PI) }
-              : { kind: 'rectangle', widthM: Math.sqrt(areaM2), heightM: Math.sqrt(areaM2) };
-          return commit({ ...photometry, shape: next });
-        }}
-      />
-      {shape.kind === 'disc' ? (
-        <LengthInput
-          label="Diameter"
-          valueM={shape.radiusM * 2}
-          units={units}
-          onCommit={(diameterM) => commit({ ...photometry, shape: { kind: 'disc', radiusM: diameterM / 2 } })}
-        />
-      ) : (
-        <div className="panel-pair">
-          <LengthInput
-            label="Width"
-            valueM={shape.widthM}
-            units={units}
-            onCommit={(widthM) => commit({ ...photometry, shape: { ...shape, widthM } })}
-          />
-          <LengthInput
-            label="Height"
-            valueM={shape.heightM}
-            units={units}
-            onCommit={(heightM) => commit({ ...photometry, shape: { ...shape, heightM } })}
-          />
-        </div>
-      )}
-      <SelectInput
-        label="Output given as"
-        value={output.kind}
-        options={[
-          { value: 'luminance', label: 'Luminance (cd/m²)' },
-          { value: 'lumens', label: 'Lumens (lm)' },
-        ]}
-        hint="Switching converts by Φ = π·L·A, so the light stays the same."
-        onCommit={(kind) => {
-          if (kind === output.kind) return null;
-          const areaM2 = softAreaM2(shape);
-          return commit({
-            ...photometry,
-            output:
-              output.kind === 'luminance'
-                ? { kind: 'lumens', lumens: Math.PI * output.cdPerM2 * areaM2 }
-                : { kind: 'luminance', cdPerM2: output.lumens / (Math.PI * areaM2) },
-          });
-        }}
-      />
-      {output.kind === 'luminance' ? (
-        <NumberInput
-          label="Luminance"
-          unit="cd/m²"
-          min={0}
-          max={1e9}
-          minExclusive
-          decimals={0}
-          value={output.cdPerM2}
-          hint="Of the face at full."
-          onCommit={(cdPerM2) => commit({ ...photometry, output: { kind: 'luminance', cdPerM2 } })}
-        />
-      ) : (
-        <NumberInput
-          label="Output"
-          unit="lm"
-          min={0}
-          max={1e7}
-          minExclusive
-          decimals={0}
-          value={output.lumens}
-          hint="Total at full, from the face."
-          onCommit={(lumens) => commit({ ...photometry, output: { kind: 'lumens', lumens } })}
-        />
-      )}
     </fieldset>
   );
 }
