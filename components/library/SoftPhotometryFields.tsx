@@ -1,10 +1,10 @@
 'use client';
 
 import { LengthInput } from '@/components/inputs/LengthInput';
-import { NumberInput } from '@/components/inputs/NumberInput';
 import { SelectInput } from '@/components/inputs/SelectInput';
 import type { SoftPhotometry } from '@/lib/plot';
 import { useEditor } from '@/components/editor/EditorContext';
+import { OutputFields } from './OutputFields';
 import { type Commit, softAreaM2 } from './photometryFields';
 
 type SoftShape = SoftPhotometry['shape'];
@@ -64,16 +64,29 @@ export function SoftFields({
           />
         </div>
       )}
-      <SelectInput
-        label="Output given as"
-        value={output.kind}
+      <OutputFields<'luminance' | 'lumens'>
         options={[
-          { value: 'luminance', label: 'Luminance (cd/m²)' },
-          { value: 'lumens', label: 'Lumens (lm)' },
+          {
+            kind: 'luminance',
+            choiceLabel: 'Luminance (cd/m²)',
+            fieldLabel: 'Luminance',
+            unit: 'cd/m²',
+            max: 1e9,
+            hint: 'Of the face at full.',
+          },
+          {
+            kind: 'lumens',
+            choiceLabel: 'Lumens (lm)',
+            fieldLabel: 'Output',
+            unit: 'lm',
+            max: 1e7,
+            hint: 'Total at full, from the face.',
+          },
         ]}
-        hint="Switching converts by Φ = π·L·A, so the light stays the same."
-        onCommit={(kind) => {
-          if (kind === output.kind) return null;
+        kind={output.kind}
+        value={output.kind === 'luminance' ? output.cdPerM2 : output.lumens}
+        switchHint="Switching converts by Φ = π·L·A, so the light stays the same."
+        onSwitch={() => {
           const areaM2 = softAreaM2(shape);
           return commit({
             ...photometry,
@@ -83,32 +96,16 @@ export function SoftFields({
                 : { kind: 'luminance', cdPerM2: output.lumens / (Math.PI * areaM2) },
           });
         }}
+        onValue={(value) =>
+          commit({
+            ...photometry,
+            output:
+              output.kind === 'luminance'
+                ? { kind: 'luminance', cdPerM2: value }
+                : { kind: 'lumens', lumens: value },
+          })
+        }
       />
-      {output.kind === 'luminance' ? (
-        <NumberInput
-          label="Luminance"
-          unit="cd/m²"
-          min={0}
-          max={1e9}
-          minExclusive
-          decimals={0}
-          value={output.cdPerM2}
-          hint="Of the face at full."
-          onCommit={(cdPerM2) => commit({ ...photometry, output: { kind: 'luminance', cdPerM2 } })}
-        />
-      ) : (
-        <NumberInput
-          label="Output"
-          unit="lm"
-          min={0}
-          max={1e7}
-          minExclusive
-          decimals={0}
-          value={output.lumens}
-          hint="Total at full, from the face."
-          onCommit={(lumens) => commit({ ...photometry, output: { kind: 'lumens', lumens } })}
-        />
-      )}
     </fieldset>
   );
 }

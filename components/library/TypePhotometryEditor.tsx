@@ -15,6 +15,7 @@ import { assertNever } from '@/lib/numeric';
 import { beamSolidAngleSr } from '@/lib/photometry';
 import { ExportOriginalFile } from './ExportOriginalFile';
 import { MeasuredFigures } from './MeasuredFigures';
+import { OutputFields } from './OutputFields';
 import { SoftFields } from './SoftPhotometryFields';
 import { type Commit } from './photometryFields';
 
@@ -199,16 +200,29 @@ function BeamFields({ photometry, commit }: { photometry: BeamPhotometry; commit
         </>
       )}
 
-      <SelectInput
-        label="Output given as"
-        value={output.kind}
+      <OutputFields<'peak' | 'lumens'>
         options={[
-          { value: 'peak', label: 'Peak intensity (cd)' },
-          { value: 'lumens', label: 'Lumens (lm)' },
+          {
+            kind: 'peak',
+            choiceLabel: 'Peak intensity (cd)',
+            fieldLabel: 'Peak intensity',
+            unit: 'cd',
+            max: 1e8,
+            hint: 'At full, at the nominal spread.',
+          },
+          {
+            kind: 'lumens',
+            choiceLabel: 'Lumens (lm)',
+            fieldLabel: 'Output',
+            unit: 'lm',
+            max: 1e7,
+            hint: 'Total at full; kept across the zoom.',
+          },
         ]}
-        hint="Switching converts through the beam's solid angle, so the light stays the same."
-        onCommit={(kind) => {
-          if (kind === output.kind) return null;
+        kind={output.kind}
+        value={output.kind === 'peak' ? output.peakCd : output.lumens}
+        switchHint="Switching converts through the beam's solid angle, so the light stays the same."
+        onSwitch={() => {
           const solidAngleSr = beamSolidAngleSr(spread);
           return commit({
             ...photometry,
@@ -218,32 +232,14 @@ function BeamFields({ photometry, commit }: { photometry: BeamPhotometry; commit
                 : { kind: 'peak', peakCd: output.lumens / solidAngleSr },
           });
         }}
+        onValue={(value) =>
+          commit({
+            ...photometry,
+            output:
+              output.kind === 'peak' ? { kind: 'peak', peakCd: value } : { kind: 'lumens', lumens: value },
+          })
+        }
       />
-      {output.kind === 'peak' ? (
-        <NumberInput
-          label="Peak intensity"
-          unit="cd"
-          min={0}
-          max={1e8}
-          minExclusive
-          decimals={0}
-          value={output.peakCd}
-          hint="At full, at the nominal spread."
-          onCommit={(peakCd) => commit({ ...photometry, output: { kind: 'peak', peakCd } })}
-        />
-      ) : (
-        <NumberInput
-          label="Output"
-          unit="lm"
-          min={0}
-          max={1e7}
-          minExclusive
-          decimals={0}
-          value={output.lumens}
-          hint="Total at full; kept across the zoom."
-          onCommit={(lumens) => commit({ ...photometry, output: { kind: 'lumens', lumens } })}
-        />
-      )}
 
       <SelectInput
         label="Zoom"
