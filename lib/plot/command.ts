@@ -55,6 +55,8 @@ function itemsWithIds(document: PlotDocument): readonly { readonly id: string }[
     ...document.fixtures,
     ...document.subjects,
     ...document.viewpoints,
+    ...document.levelSets,
+    ...document.power.feeders,
   ];
 }
 

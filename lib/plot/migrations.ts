@@ -4,6 +4,7 @@
  * returns the plain JSON of version N + 1; it must not throw for files that were valid at N.
  */
 import { PLOT_VERSION } from './schema/document';
+import { DEFAULT_POWER, DEFAULT_RIGGING } from './schema/power';
 
 export type JsonObject = { [key: string]: unknown };
 
@@ -32,6 +33,26 @@ export const MIGRATIONS: readonly Migration[] = [
     from: 1,
     summary: 'fixture types may carry measured photometry; existing files only change their version',
     migrate: (file) => ({ ...file, version: 2 }),
+  },
+  {
+    from: 2,
+    summary:
+      'add level sets (none), role overrides per subject (none), power (230 V single phase, 80 %, no circuits) and a 1 kg rigging allowance per unit',
+    migrate: (file) => ({
+      ...file,
+      subjects: Array.isArray(file.subjects)
+        ? file.subjects.map((person: unknown) =>
+            person !== null && typeof person === 'object' && !Array.isArray(person)
+              ? { roleOverrides: {}, ...person }
+              : person,
+          )
+        : file.subjects,
+      levelSets: file.levelSets ?? [],
+      activeLevelSetId: file.activeLevelSetId ?? null,
+      power: file.power ?? DEFAULT_POWER,
+      rigging: file.rigging ?? DEFAULT_RIGGING,
+      version: 3,
+    }),
   },
 ];
 

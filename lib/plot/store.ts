@@ -6,6 +6,7 @@
  * reverts to the state at pointer-down. A new change clears redo. Selection, zoom and hover are view
  * state and do not live here.
  */
+import { tidyReferences } from './tidy';
 import { type Patch, applyPatches, enablePatches, produceWithPatches } from 'immer';
 import type { PlotDocument } from './schema/document';
 import { type Command, CommandRefused } from './command';
@@ -75,6 +76,7 @@ export function createPlotStore(initial: PlotDocument): PlotStore {
       try {
         [next, patches, inversePatches] = produceWithPatches(document, (draft) => {
           command.apply(draft, args);
+          tidyReferences(draft);
         });
       } catch (error) {
         if (error instanceof CommandRefused) return { ok: false, message: error.message };

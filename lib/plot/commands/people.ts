@@ -9,13 +9,15 @@ import {
 import { type PlanPoint, planPoint } from '../schema/primitives';
 
 /** Add a subject (a person to be lit). */
-export const addSubject = defineCommand<Omit<Subject, 'id'> & { id?: string }>({
+export const addSubject = defineCommand<
+  Omit<Subject, 'id' | 'roleOverrides'> & { id?: string; roleOverrides?: Subject['roleOverrides'] }
+>({
   name: 'subject.add',
   label: ({ name }) => `Add subject ${name}`,
   apply(draft, args) {
     const id = args.id ?? nextId(draft, 'sub');
     requireFreeId(draft, id);
-    draft.subjects.push(checked(subjectSchema, { ...args, id }, 'new subject'));
+    draft.subjects.push(checked(subjectSchema, { roleOverrides: {}, ...args, id }, 'new subject'));
   },
 });
 

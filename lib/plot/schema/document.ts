@@ -5,9 +5,11 @@ import { stage, hangingPosition } from './stage';
 import { fixtureType, fixtureTypeRuleProblems, zoomSettingProblem } from './fixtureType';
 import { fixture } from './fixture';
 import { subject, viewpoint } from './people';
+import { power, rigging } from './power';
+import { levelSet } from './looks';
 
 export const PLOT_FORMAT = 'throwline-plot';
-export const PLOT_VERSION = 2;
+export const PLOT_VERSION = 3;
 
 const documentShape = z.strictObject({
   format: z.literal(PLOT_FORMAT, { error: expecting(`must be "${PLOT_FORMAT}"`) }),
@@ -26,6 +28,11 @@ const documentShape = z.strictObject({
   viewpoints: z.array(viewpoint).max(100, 'may have at most 100 viewpoints'),
   /** The viewpoint faces are judged from by default; null when there is none. */
   mainViewpointId: id().nullable(),
+  levelSets: z.array(levelSet).max(500, 'may have at most 500 level sets'),
+  /** The level set being worked on; the fixtures' levels are its levels. Null when none is chosen. */
+  activeLevelSetId: id().nullable(),
+  power,
+  rigging,
 });
 
 /** The plot document schema with cross-reference checks (ids, types, positions, zoom, angles). */
@@ -49,6 +56,8 @@ export const plotDocument = documentShape.superRefine((document, context) => {
   document.fixtures.forEach((unit, index) => claim(unit.id, ['fixtures', index]));
   document.subjects.forEach((person, index) => claim(person.id, ['subjects', index]));
   document.viewpoints.forEach((view, index) => claim(view.id, ['viewpoints', index]));
+  document.levelSets.forEach((set, index) => claim(set.id, ['levelSets', index]));
+  document.power.feeders.forEach((line, index) => claim(line.id, ['power', 'feeders', index]));
 
   document.fixtureTypes.forEach((type, index) => {
     for (const problem of fixtureTypeRuleProblems(type)) {
@@ -93,6 +102,7 @@ export const plotDocument = documentShape.superRefine((document, context) => {
       message: `names a viewpoint "${document.mainViewpointId}" that does not exist`,
     });
   }
+  for (const problem of referenceProblems(document)) context.addIssue({ code: 'custom', ...problem });
   document.viewpoints.forEach((view, index) => {
     if (view.kind === 'camera' && view.camera === null) {
       context.addIssue({
@@ -105,6 +115,61 @@ export const plotDocument = documentShape.superRefine((document, context) => {
 });
 
 export type PlotDocument = z.infer<typeof plotDocument>;
+
+type DocumentShape = z.infer<typeof documentShape>;
+
+/** Level sets, role overrides and circuits must name things that exist, once each. */
+function referenceProblems(document: DocumentShape): { path: (string | number)[]; message: string }[] {
+  const problems: { path: (string | number)[]; message: string }[] = [];
+  const units = new Set(document.fixtures.map((unit) => unit.id));
+  document.levelSets.forEach((set, index) => {
+    for (const fixtureId of Object.keys(set.levels)) {
+      if (!units.has(fixtureId))
+        problems.push({
+          path: ['levelSets', index, 'levels', fixtureId],
+          message: `names a fixture "${fixtureId}" that does not exist`,
+        });
+    }
+  });
+  document.subjects.forEach((person, index) => {
+    for (const fixtureId of Object.keys(person.roleOverrides)) {
+      if (!units.has(fixtureId))
+        problems.push({
+          path: ['subjects', index, 'roleOverrides', fixtureId],
+          message: `names a fixture "${fixtureId}" that does not exist`,
+        });
+    }
+  });
+  if (
+    document.activeLevelSetId !== null &&
+    !document.levelSets.some((set) => set.id === document.activeLevelSetId)
+  )
+    problems.push({
+      path: ['activeLevelSetId'],
+      message: `names a level set "${document.activeLevelSetId}" that does not exist`,
+    });
+  const feeders = new Set(document.power.feeders.map((line) => line.id));
+  const addresses = new Set<string>();
+  document.power.circuits.forEach((entry, index) => {
+    if (addresses.has(entry.address))
+      problems.push({
+        path: ['power', 'circuits', index, 'address'],
+        message: `repeats the circuit "${entry.address}"`,
+      });
+    addresses.add(entry.address);
+    if (entry.feederId !== null && !feeders.has(entry.feederId))
+      problems.push({
+        path: ['power', 'circuits', index, 'feederId'],
+        message: `names a feeder "${entry.feederId}" that does not exist`,
+      });
+    if (document.power.system === 'single' && entry.phase !== 'L1')
+      problems.push({
+        path: ['power', 'circuits', index, 'phase'],
+        message: 'must be L1 on a single-phase supply',
+      });
+  });
+  return problems;
+}
 
 /** Path as people read it: `fixtures[3].focus.z`. */
 export function formatPath(path: readonly PropertyKey[]): string {

@@ -4,3 +4,5 @@ export * from './fixtureType';
 export * from './fixture';
 export * from './people';
 export * from './document';
+export * from './power';
+export * from './looks';

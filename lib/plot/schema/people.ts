@@ -1,6 +1,7 @@
 /** Subjects (the people to be lit) and viewpoints (the audience and cameras that see them). */
 import { z } from 'zod';
 import { finite, id, name, notes, planPoint, worldPoint, expecting } from './primitives';
+import { roleOverrides } from './looks';
 
 export const subject = z.strictObject({
   id: id(),
@@ -11,6 +12,8 @@ export const subject = z.strictObject({
   faceHeightM: finite().gt(0, 'must be greater than 0 m').max(5, 'must be at most 5 m'),
   /** Plan bearing the subject faces, degrees, same convention as pan: 0 = toward the audience (−y). */
   facingDeg: finite().min(-360, 'must be between −360° and 360°').max(360, 'must be between −360° and 360°'),
+  /** Roles the user has given sources on this subject, keyed by fixture id; others follow the rule. */
+  roleOverrides,
   notes: notes(),
 });
 export type Subject = z.infer<typeof subject>;

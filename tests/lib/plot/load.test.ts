@@ -119,10 +119,25 @@ describe('loading plot files', () => {
   });
 });
 
+/** The tiny plot as a version 2 file had it: no level sets, overrides, power or rigging. */
+function tinyPlotAtVersion2() {
+  const {
+    levelSets: _sets,
+    activeLevelSetId: _active,
+    power: _power,
+    rigging: _rigging,
+    ...rest
+  } = tinyPlot();
+  return {
+    ...rest,
+    version: 2,
+    subjects: rest.subjects.map(({ roleOverrides: _overrides, ...person }) => person),
+  };
+}
+
 describe('migrations', () => {
   it('a version 0 draft (title, no units) is brought up to date', () => {
-    const current = tinyPlot();
-    const { name, displayUnits: _units, version: _version, ...rest } = current;
+    const { name, displayUnits: _units, version: _version, ...rest } = tinyPlotAtVersion2();
     const draft = { ...rest, version: 0, title: name };
     const result = loadPlotText(JSON.stringify(draft));
     expect(result.ok).toBe(true);
@@ -133,22 +148,39 @@ describe('migrations', () => {
     expect(result.migrations).toEqual([
       '0 → 1: rename title → name; add displayUnits "metric"',
       '1 → 2: fixture types may carry measured photometry; existing files only change their version',
+      '2 → 3: add level sets (none), role overrides per subject (none), power (230 V single phase, 80 %, no circuits) and a 1 kg rigging allowance per unit',
     ]);
   });
 
-  it('a version 1 file is read unchanged but for its version number', () => {
-    const current = tinyPlot();
-    const result = loadPlotText(JSON.stringify({ ...current, version: 1 }));
+  it('a version 1 file is read unchanged but for its version number and the version 3 defaults', () => {
+    const result = loadPlotText(JSON.stringify({ ...tinyPlotAtVersion2(), version: 1 }));
     expect(result.ok).toBe(true);
     if (!result.ok) return;
-    expect(result.document).toEqual(current);
-    expect(result.document.version).toBe(2);
-    expect(result.migrations).toHaveLength(1);
+    expect(result.document).toEqual(tinyPlot());
+    expect(result.document.version).toBe(3);
+    expect(result.migrations).toHaveLength(2);
+  });
+
+  it('a version 2 file gains no level sets, empty role overrides, a 230 V supply and a 1 kg allowance', () => {
+    const result = loadPlotText(JSON.stringify(tinyPlotAtVersion2()));
+    expect(result.ok).toBe(true);
+    if (!result.ok) return;
+    expect(result.document.levelSets).toEqual([]);
+    expect(result.document.activeLevelSetId).toBeNull();
+    expect(result.document.subjects[0].roleOverrides).toEqual({});
+    expect(result.document.power).toEqual({
+      system: 'single',
+      phaseVoltageV: 230,
+      continuousLimitPct: 80,
+      feeders: [],
+      circuits: [],
+    });
+    expect(result.document.rigging).toEqual({ allowancePerUnitKg: 1 });
   });
 
   it('a file with no version is read as version 0', () => {
-    const { version: _version, ...rest } = tinyPlot();
+    const { version: _version, ...rest } = tinyPlotAtVersion2();
     const result = loadPlotText(JSON.stringify(rest));
-    expect(result.ok && result.migrations.length).toBe(2);
+    expect(result.ok && result.migrations.length).toBe(3);
   });
 });

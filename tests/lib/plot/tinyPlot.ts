@@ -73,7 +73,17 @@ export function tinyPlot(overrides: Partial<PlotDocument> = {}): PlotDocument {
     ],
     fixtureTypes: [profileType, zoomType],
     fixtures: [unit],
-    subjects: [{ id: 'sub-1', name: 'Ada', mark: { x: 0, y: 2 }, faceHeightM: 1.6, facingDeg: 0, notes: '' }],
+    subjects: [
+      {
+        id: 'sub-1',
+        name: 'Ada',
+        mark: { x: 0, y: 2 },
+        faceHeightM: 1.6,
+        facingDeg: 0,
+        roleOverrides: {},
+        notes: '',
+      },
+    ],
     viewpoints: [
       { id: 'vp-1', name: 'House centre', kind: 'audience', position: { x: 0, y: -8, z: 1.6 }, camera: null },
     ],
