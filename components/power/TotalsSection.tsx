@@ -34,8 +34,8 @@ export function TotalsSection({ load }: { load: SupplyLoad }) {
         </tbody>
       </table>
       <p className="panel-note" data-readout="totalPower" data-value={String(load.totalPowerW)}>
-        {formatW(load.totalPowerW)} at full (about {formatW(load.totalAtLevelW)} at the current levels, a
-        rough figure).
+        Listed circuits {formatW(load.totalPowerW)} at full (about {formatW(load.totalAtLevelW)} at the
+        current levels, a rough figure); every unit together {formatW(load.allUnitsPowerW)}.
         {three
           ? ` Neutral current is the phasor sum of the phase currents for loads at unity power factor; with real LED and discharge sources it can be higher.`
           : ' On a single phase the neutral carries the phase current.'}

@@ -102,6 +102,8 @@ export interface SupplyLoad {
   /** Total at full of the listed circuits, W. */
   readonly totalPowerW: number;
   readonly totalAtLevelW: number;
+  /** Every unit's nameplate power at full, on a listed circuit or not, W. */
+  readonly allUnitsPowerW: number;
   readonly neutralCurrentA: number;
   /** Phase imbalance, %; null on a single-phase supply or when nothing is loaded. */
   readonly imbalancePct: number | null;
@@ -235,6 +237,7 @@ export function supplyLoad(supply: LoadSupplyInput, units: readonly LoadUnitInpu
     phases,
     totalPowerW: circuits.reduce((sum, entry) => sum + entry.powerW, 0),
     totalAtLevelW: circuits.reduce((sum, entry) => sum + entry.atLevelW, 0),
+    allUnitsPowerW: watts(units),
     neutralCurrentA: neutralOf(phases),
     imbalancePct: supply.system === 'three' ? phaseImbalancePct(phases.map((phase) => phase.currentA)) : null,
     unlisted,

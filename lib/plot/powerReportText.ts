@@ -78,7 +78,7 @@ export function formatPowerText(power: ReportPower): string[] {
     `  per phase: ${power.phases.map((phase) => `${phase.phase} ${watts(phase.powerW)} ${amps(phase.currentA)}`).join('; ')}`,
   );
   lines.push(
-    `  total ${watts(power.totalPowerW)} at full (about ${watts(power.totalAtLevelW)} at the current levels); neutral ${amps(power.neutralCurrentA)}${
+    `  listed circuits ${watts(power.totalPowerW)} at full (about ${watts(power.totalAtLevelW)} at the current levels); every unit together ${watts(power.allUnitsPowerW)}; neutral ${amps(power.neutralCurrentA)}${
       power.imbalancePct === null
         ? ''
         : `; phase imbalance ${power.imbalancePct.toFixed(1)} % (largest deviation from the mean phase current / mean)`

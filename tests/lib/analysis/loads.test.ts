@@ -64,6 +64,9 @@ describe('single-phase arithmetic', () => {
     expect(circuit.atLevelW).toBe(375);
     expect(load.unlisted).toEqual([{ address: 'B9', unitIds: ['u3'], powerW: 500, currentA: 500 / 230 }]);
     expect(load.noCircuitUnitIds).toEqual(['u4']);
+    // Every unit together: 750 + 1000 + 500 + 300 = 2550 W; the listed circuits only 1750 W.
+    expect(load.allUnitsPowerW).toBe(2550);
+    expect(load.totalPowerW).toBe(1750);
     // Single phase: the neutral carries the phase current; no line voltage, no imbalance.
     expect(load.neutralCurrentA).toBeCloseTo(1750 / 230, 12);
     expect(load.lineVoltageV).toBeNull();
