@@ -52,6 +52,10 @@ export function CircuitRow({ load, limitPct }: { load: CircuitLoad; limitPct: nu
       </button>
       {open ? (
         <div className="power-circuit-edit">
+          <p className="panel-note" data-readout="atLevel" data-value={String(load.atLevelW)}>
+            At the units&apos; current levels about {formatW(load.atLevelW)} (a rough figure: nameplate ×
+            level; the check above uses full load).
+          </p>
           <div className="panel-pair">
             <TextInput
               label="Address"
