@@ -44,6 +44,12 @@ describe('the Power panel on the conference demo', () => {
     expect(document.querySelector('[data-position="pos-truss-front"]')?.getAttribute('data-total-kg')).toBe(
       '220',
     );
+    // Opened: the rough load at the current levels. FT-2's washes stand at 33, 42, 42, 50, 33, 33 and 42 %
+    // in the demo file: 400 W × 2.75 = 1100 W.
+    fireEvent.click(screen.getByRole('button', { name: 'Edit circuit FT-2' }));
+    expect(
+      Number(document.querySelector('[data-readout="atLevel"]')?.getAttribute('data-value')),
+    ).toBeCloseTo(1100, 9);
   });
 
   it('flags FT-2 over its limit, then over its rating, as units are put on it', () => {
