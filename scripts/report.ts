@@ -1,6 +1,7 @@
 /**
  * Command-line report: `npm run report -- <file.json> [--json] [--units metric|imperial] [--target LUX]`.
- * Prints the focus figures of every fixture and the light on every face. Bad files print every
+ * Prints the focus figures of every fixture, the light on every face, coverage, and the power and
+ * weight checks with their cautions. Bad files print every
  * problem with its path and exit with status 1; bad arguments exit with status 2.
  */
 import { readFileSync } from 'node:fs';

@@ -20,6 +20,7 @@ import { PanelSection } from './PanelSection';
 import { PointFields } from './PointFields';
 import { formatAngleShort, outcomeOf } from './format';
 import { unitPlace } from './labels';
+import { CircuitLoadNote } from '@/components/power/CircuitLoadNote';
 
 /** Everything about one unit: what it is, where it hangs and points, its control, and its live figures. */
 export function FixtureInspector({ id }: { id: string }) {
@@ -72,6 +73,7 @@ export function FixtureInspector({ id }: { id: string }) {
             onCommit={(circuit) => edit({ circuit: circuit.trim() === '' ? null : circuit })}
           />
         </div>
+        <CircuitLoadNote address={fixture.circuit} />
         <NumberInput
           label="Level"
           value={fixture.levelPct}

@@ -7,9 +7,10 @@ import { TextInput } from '@/components/inputs/TextInput';
 import { useEditor } from '@/components/editor/EditorContext';
 import { type HangingPosition, POSITION_KINDS, updatePosition } from '@/lib/plot';
 import { formatLength } from '@/lib/units';
+import { PositionWeightCheck } from '@/components/power/PositionWeightCheck';
 import { DeletePosition } from './DeletePosition';
 import { PanelSection } from './PanelSection';
-import { formatKg, outcomeOf } from './format';
+import { outcomeOf } from './format';
 import { fixturesInHangingOrder, fixtureLabeller } from './labels';
 
 type PositionChanges = Partial<Omit<HangingPosition, 'id'>>;
@@ -31,10 +32,6 @@ export function PositionInspector({ id }: { id: string }) {
   const edit = (changes: PositionChanges) => outcomeOf(run(updatePosition, { id, changes }));
   const held = fixturesInHangingOrder(document).filter((fixture) => fixture.positionId === id);
   const label = fixtureLabeller(document);
-  const weights = new Map(document.fixtureTypes.map((type) => [type.id, type.weightKg]));
-  const hungKg = held.reduce((total, fixture) => total + (weights.get(fixture.typeId) ?? 0), 0);
-  const unknownWeights = held.filter((fixture) => !((weights.get(fixture.typeId) ?? 0) > 0)).length;
-  const over = position.ratedLoadKg !== null && hungKg > position.ratedLoadKg;
   const shape = position.shape;
 
   return (
@@ -86,25 +83,7 @@ export function PositionInspector({ id }: { id: string }) {
           ]}
           onCommit={(loadKind) => edit({ loadKind })}
         />
-        <p
-          className={over ? 'panel-warning' : 'panel-note'}
-          data-readout="hungKg"
-          data-value={String(hungKg)}
-        >
-          Units&apos; own weight: {formatKg(hungKg)}
-          {position.ratedLoadKg === null ? '' : ` of ${formatKg(position.ratedLoadKg)} rated`}
-          {over ? ': over its rating.' : '.'} Clamps, safeties and cable are not counted
-          {unknownWeights > 0
-            ? `, and ${unknownWeights} unit${unknownWeights === 1 ? "'s" : "s'"} weight is not known (0 kg)`
-            : ''}
-          ; the sum is set against the rating as one total, whether the rating is for a spread or a point
-          load.
-        </p>
-        <p className="panel-caution" role="note">
-          A planning figure, not a load calculation. What may hang on a position, and how, must be checked and
-          approved by a qualified rigger or the person responsible for the venue under local regulations;
-          every unit and accessory overhead needs its safety cable.
-        </p>
+        <PositionWeightCheck id={id} />
       </PanelSection>
       <PanelSection title={`Units (${held.length})`}>
         {held.length === 0 ? (

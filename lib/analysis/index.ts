@@ -6,3 +6,5 @@ export * from './subjectLight';
 export * from './pointLight';
 export * from './subjectLighting';
 export * from './coverage';
+export * from './loads';
+export * from './rigWeights';

@@ -12,3 +12,5 @@ export * from './library';
 export * from './report';
 export * from './cameraExposure';
 export * from './reportText';
+export * from './powerCheck';
+export * from './powerReport';

@@ -13,6 +13,7 @@ import type { Footprint } from '../geometry';
 import type { PlotDocument } from './schema/document';
 import { mainViewpointPosition, resolveRig, subjectPlacements } from './resolve';
 import { type SubjectExposure, subjectExposure } from './cameraExposure';
+import { type ReportPower, type ReportWeight, reportPower, reportWeight } from './powerReport';
 
 export interface ReportFootprint {
   readonly open: boolean;
@@ -115,6 +116,10 @@ export interface PlotReport {
   readonly fixtures: readonly ReportFixture[];
   readonly subjects: readonly ReportSubject[];
   readonly coverage: ReportCoverage;
+  /** Loads per circuit, phase and feeder (powerReport.ts). */
+  readonly power: ReportPower;
+  /** Weight per hanging position (powerReport.ts). */
+  readonly weight: ReportWeight;
 }
 
 function reportFootprint(footprint: Footprint | null): ReportFootprint | null {
@@ -239,5 +244,7 @@ export function buildReport(document: PlotDocument, options: ReportOptions = {})
     fixtures,
     subjects,
     coverage: reportCoverage(document, options),
+    power: reportPower(document),
+    weight: reportWeight(document),
   };
 }

@@ -1,6 +1,7 @@
 /** The plot report as text for a terminal or a printout, in metric or imperial display units. */
 import { formatFeetInches, luxToFootcandles, metresToFeet } from '../units';
 import type { PlotReport, ReportFootprint } from './report';
+import { formatPowerText, formatWeightText } from './powerReportText';
 
 export type DisplayUnits = 'metric' | 'imperial';
 
@@ -145,6 +146,7 @@ export function formatReportText(report: PlotReport, units: DisplayUnits): strin
       `  ${region.kind === 'hot' ? 'hot' : 'dark'} (${region.reason}) at x ${length(region.centre.x, units)}, y ${length(region.centre.y, units)}: ${region.areaM2.toFixed(2)} m², ${region.kind === 'hot' ? 'peak' : 'lowest'} ${illuminance(region.extremeLx, units)}${causes ? `; ${causes}` : ''}`,
     );
   }
+  lines.push('', ...formatPowerText(report.power), '', ...formatWeightText(report.weight, units));
   return `${lines.join('\n')}\n`;
 }
 

@@ -54,8 +54,10 @@ describe('position inspector', () => {
     view.select(['pos-1']);
     const units = within(screen.getByRole('region', { name: 'Units (1)' }));
     expect(units.getByRole('button').textContent).toBe('Front pipe #1 — Profile 26°, ch 1');
-    // One 8 kg profile on a 200 kg pipe.
-    expect(screen.getByText(/Units' own weight/).textContent).toContain('8 kg of 200 kg rated.');
+    // One 8 kg profile and the 1 kg allowance on a 200 kg pipe: 9 kg, 4.5 % (shown whole: 5 %).
+    expect(screen.getByText(/Units' own weight/).textContent).toContain(
+      "Units' own weight 8 kg + allowance 1 × 1 kg = 9 kg of 200 kg rated (5 %).",
+    );
     fireEvent.click(units.getByRole('button'));
     expect(view.editor().selection).toEqual(['fx-1']);
   });

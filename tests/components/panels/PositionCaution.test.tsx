@@ -23,6 +23,8 @@ describe('the weight on a position', () => {
     view.select(['pos-1']);
     const readout = document.querySelector('[data-readout="hungKg"]');
     expect(readout?.getAttribute('data-value')).toBe('16');
+    // With the 1 kg allowance for each of the three units: 19 kg.
+    expect(readout?.getAttribute('data-total')).toBe('19');
     expect(readout?.textContent).toContain("1 unit's weight is not known");
     expect(screen.getByRole('note').textContent).toMatch(/qualified rigger/);
     expect(screen.getByRole('note').textContent).toMatch(/safety cable/);
