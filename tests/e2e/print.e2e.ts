@@ -1,0 +1,108 @@
+import { mkdirSync, writeFileSync } from 'node:fs';
+import path from 'node:path';
+import type { Browser, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { launchBrowser, recordPageProblems } from './support/browser';
+import { createShowFromDemo, readDemo } from './support/shows';
+
+const artifactsDir = path.resolve(import.meta.dirname, '..', '..', 'test-artifacts');
+
+let browser: Browser;
+beforeAll(async () => {
+  browser = await launchBrowser();
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+/** Width of a printable area in CSS px (96 px per inch): paper minus the two 12 mm margins. */
+const printableWidthPx = (paperMm: number) => Math.round(((paperMm - 24) / 25.4) * 96);
+
+/** The MediaBox sizes of a PDF's pages, in points (Chromium writes them uncompressed). */
+function mediaBoxes(pdf: Buffer): [number, number][] {
+  const text = pdf.toString('latin1');
+  return [...text.matchAll(/\/MediaBox\s*\[\s*0 0 ([\d.]+) ([\d.]+)\s*\]/g)].map((match) => [
+    Math.round(Number(match[1])),
+    Math.round(Number(match[2])),
+  ]);
+}
+
+async function openPrint(page: Page, url: string): Promise<void> {
+  await page.goto(url, { waitUntil: 'load' });
+  await page.getByTestId('title-block').first().waitFor();
+}
+
+describe('print view', () => {
+  it('prints the conference demo: title block, plan, every fixture on the schedule and the focus chart', async () => {
+    const baseUrl = inject('baseUrl');
+    const demo = readDemo('conference.json');
+    const id = await createShowFromDemo(baseUrl, 'conference.json');
+    const page = await browser.newPage({ viewport: { width: printableWidthPx(210), height: 1000 } });
+    const problems = recordPageProblems(page);
+    await openPrint(page, new URL(`/shows/${id}/print?sheet=all&paper=a4`, baseUrl).toString());
+
+    // Title block on each of the three sheets: the show, the venue, the stored revision (1: just made).
+    const blocks = page.getByTestId('title-block');
+    expect(await blocks.count()).toBe(3);
+    const first = await blocks.first().innerText();
+    expect(first).toContain(demo.name);
+    expect(first).toContain(demo.venue);
+    expect(first).toMatch(/Printed\s+\d{1,2} [A-Z][a-z]{2} \d{4}, \d\d:\d\d UTC/);
+    expect(await page.getByTestId('title-revision').first().innerText()).toBe('1');
+
+    // The schedule lists every fixture of the demo once; the focus chart has a card for each.
+    const listed = await page
+      .locator('.schedule-sheet tr[data-fixture-id]')
+      .evaluateAll((rows) => rows.map((row) => row.getAttribute('data-fixture-id')));
+    expect([...listed].sort()).toEqual(demo.fixtures.map((unit: { id: string }) => unit.id).sort());
+    expect(await page.locator('.focus-card').count()).toBe(demo.fixtures.length);
+    const firstUnit = demo.fixtures[0] as { purpose: string };
+    expect(await page.locator('.schedule-sheet').innerText()).toContain(firstUnit.purpose);
+    // The plan is drawn: one glyph group per unit plus positions.
+    expect(await page.locator('svg.plan-drawing polygon').count()).toBeGreaterThan(demo.fixtures.length);
+
+    // Print media: the toolbar goes; look at each sheet at its printed width.
+    await page.emulateMedia({ media: 'print' });
+    expect(await page.locator('.print-toolbar').isVisible()).toBe(false);
+    mkdirSync(artifactsDir, { recursive: true });
+    for (const name of ['plan', 'schedule', 'focus']) {
+      if (name === 'plan')
+        await page.setViewportSize({ width: Math.round(((297 - 20) / 25.4) * 96), height: 1000 });
+      else await page.setViewportSize({ width: printableWidthPx(210), height: 1000 });
+      const sheet = page.locator(`.print-sheet-${name}`);
+      await sheet.screenshot({ path: path.join(artifactsDir, `print-${name}.png`) });
+      // Nothing runs past the printable width.
+      const overflow = await sheet.evaluate((element) => element.scrollWidth - element.clientWidth);
+      expect(overflow).toBeLessThanOrEqual(0);
+    }
+
+    await page
+      .locator('.focus-group')
+      .first()
+      .screenshot({ path: path.join(artifactsDir, 'print-focus-first.png') });
+
+    // A4 PDF at the page's own sizes: the plan sheet landscape, the rest portrait (A4 = 595 × 842 pt).
+    const pdf = await page.pdf({ preferCSSPageSize: true, printBackground: true });
+    writeFileSync(path.join(artifactsDir, 'print-conference-a4.pdf'), pdf);
+    expect(pdf.subarray(0, 5).toString('latin1')).toBe('%PDF-');
+    const boxes = mediaBoxes(pdf);
+    expect(boxes[0]).toEqual([842, 595]);
+    expect(boxes.length).toBeGreaterThanOrEqual(3);
+    expect(boxes.slice(1).every(([w, h]) => w === 595 && h === 842)).toBe(true);
+    expect(problems).toEqual({ consoleErrors: [], pageErrors: [], failedRequests: [] });
+    await page.close();
+  });
+
+  it('prints one sheet on Letter paper when asked (Letter = 612 × 792 pt)', async () => {
+    const baseUrl = inject('baseUrl');
+    const id = await createShowFromDemo(baseUrl, 'conference.json');
+    const page = await browser.newPage();
+    await openPrint(page, new URL(`/shows/${id}/print?sheet=focus&paper=letter`, baseUrl).toString());
+    expect(await page.getByTestId('title-block').count()).toBe(1);
+    expect(await page.locator('.print-sheet-focus').count()).toBe(1);
+    const boxes = mediaBoxes(await page.pdf({ preferCSSPageSize: true }));
+    expect(boxes.length).toBeGreaterThanOrEqual(1);
+    expect(boxes.every(([w, h]) => w === 612 && h === 792)).toBe(true);
+    await page.close();
+  });
+});
