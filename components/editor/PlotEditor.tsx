@@ -8,6 +8,8 @@ import { ListsPanel } from '../panels/ListsPanel';
 import type { ViewTransform } from '../canvas/viewTransform';
 import { fitView, zoomAt } from '../canvas/viewTransform';
 import { CoveragePanel } from '../coverage/CoveragePanel';
+import { type MainView, MainViewSwitch, PaperworkView } from '../paperwork/MainViewSwitch';
+import { PaperworkMenu } from '../paperwork/PaperworkMenu';
 import { useCoverageMap } from '../coverage/useCoverageMap';
 import { EditorProvider, useEditor } from './EditorContext';
 import { ShowSaving } from './ShowSaving';
@@ -45,6 +47,7 @@ function EditorLayout({ show }: { show?: EditorShow }) {
   const [showAllPools, setShowAllPools] = useState(true);
   const [canvasSize, setCanvasSize] = useState({ width: 0, height: 0 });
   const [sideTab, setSideTab] = useState<'item' | 'light'>('item');
+  const [mainView, setMainView] = useState<MainView>('plan');
   const coverage = useCoverageMap(editor.document, editor.derived);
   const openTab = (tab: 'item' | 'light') => {
     setSideTab(tab);
@@ -75,6 +78,7 @@ function EditorLayout({ show }: { show?: EditorShow }) {
           showAllPools={showAllPools}
           onShowAllPoolsChange={setShowAllPools}
         />
+        <PaperworkMenu showId={show?.id} planSize={canvasSize} planShown={mainView === 'plan'} />
         {show ? <ShowSaving showId={show.id} revision={show.revision} /> : null}
       </header>
       <aside className="editor-lists" aria-label="Show lists">
@@ -82,16 +86,20 @@ function EditorLayout({ show }: { show?: EditorShow }) {
       </aside>
       <main className="editor-plan">
         <h2 className="visually-hidden">Stage plan</h2>
-        <PlanCanvas
-          tool={tool}
-          view={view}
-          onViewChange={setView}
-          onCanvasSize={setCanvasSize}
-          fitRequest={fitRequest}
-          showAllPools={showAllPools}
-          lightMap={coverage.settings.visible ? coverage.map : null}
-          lightMapTargetLx={coverage.settings.targetLx}
-        />
+        <MainViewSwitch value={mainView} onChange={setMainView} />
+        {mainView !== 'plan' ? <PaperworkView view={mainView} /> : null}
+        {mainView === 'plan' ? (
+          <PlanCanvas
+            tool={tool}
+            view={view}
+            onViewChange={setView}
+            onCanvasSize={setCanvasSize}
+            fitRequest={fitRequest}
+            showAllPools={showAllPools}
+            lightMap={coverage.settings.visible ? coverage.map : null}
+            lightMapTargetLx={coverage.settings.targetLx}
+          />
+        ) : null}
       </main>
       <aside className="editor-inspector" aria-label={sideTab === 'item' ? 'Selected item' : 'Light map'}>
         <div className="side-tabs" role="tablist" aria-label="Side panel">

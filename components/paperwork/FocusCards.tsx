@@ -13,6 +13,7 @@ import {
 import { type LengthUnitSystem, formatLength } from '@/lib/units';
 import { formatAngleShort } from '../panels/format';
 import { groupByPosition } from './groupByPosition';
+import './focusCards.css';
 
 const length = (valueM: number | null, units: LengthUnitSystem) =>
   valueM === null ? '—' : formatLength(valueM, units);
