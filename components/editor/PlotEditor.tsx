@@ -69,6 +69,7 @@ function EditorLayout({ show }: { show?: EditorShow }) {
             {editor.document.name}
             {editor.document.venue ? <span> — {editor.document.venue}</span> : null}
           </p>
+          <PaperworkMenu showId={show?.id} planSize={canvasSize} planShown={mainView === 'plan'} />
         </div>
         <Toolbar
           tool={tool}
@@ -78,7 +79,6 @@ function EditorLayout({ show }: { show?: EditorShow }) {
           showAllPools={showAllPools}
           onShowAllPoolsChange={setShowAllPools}
         />
-        <PaperworkMenu showId={show?.id} planSize={canvasSize} planShown={mainView === 'plan'} />
         {show ? <ShowSaving showId={show.id} revision={show.revision} /> : null}
       </header>
       <aside className="editor-lists" aria-label="Show lists">

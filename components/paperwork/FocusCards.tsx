@@ -34,11 +34,9 @@ function poolText(
 
 /** The lens or zoom to set: the zoom setting, else the type's spread, with its lens options. */
 function lensText(row: FocusChartRow): string {
-  const spread =
-    row.beamAngleDeg === null || row.fieldAngleDeg === null
-      ? 'soft source'
-      : `${formatAngleShort(row.beamAngleDeg)} beam / ${formatAngleShort(row.fieldAngleDeg)} field`;
-  const zoom = row.zoomBeamDeg === null ? '' : `zoom at ${formatAngleShort(row.zoomBeamDeg)}: `;
+  if (row.beamAngleDeg === null || row.fieldAngleDeg === null) return 'soft source: no lens';
+  const spread = `${formatAngleShort(row.beamAngleDeg)} beam · ${formatAngleShort(row.fieldAngleDeg)} field`;
+  const zoom = row.zoomBeamDeg === null ? '' : 'zoom to ';
   const lenses =
     row.lensOptionsDeg.length > 0 ? ` (lenses ${row.lensOptionsDeg.map(formatAngleShort).join(', ')})` : '';
   return `${zoom}${spread}${lenses}`;

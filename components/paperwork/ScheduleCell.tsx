@@ -11,18 +11,21 @@ export function ScheduleCell({
   shown,
   onCommit,
   numeric,
+  wide,
 }: {
   label: string;
   shown: string;
   onCommit: (text: string) => CommitOutcome;
   numeric?: boolean;
+  /** Room for a sentence (purpose, notes). */
+  wide?: boolean;
 }) {
   const field = useFieldDraft(shown, onCommit);
   return (
     <div className={field.error ? 'schedule-cell schedule-cell-invalid' : 'schedule-cell'}>
       <input
         type="text"
-        className={numeric ? 'schedule-input schedule-input-number' : 'schedule-input'}
+        className={`schedule-input${numeric ? ' schedule-input-number' : ''}${wide ? ' schedule-input-wide' : ''}`}
         aria-label={label}
         inputMode={numeric ? 'decimal' : undefined}
         autoComplete="off"

@@ -119,9 +119,10 @@ export function ScheduleTable() {
               >
                 <td>{row.position ?? 'free-standing'}</td>
                 <td>{row.unit ?? '—'}</td>
-                <td>{row.type}</td>
+                <td className="schedule-type">{row.type}</td>
                 <td>
                   <ScheduleCell
+                    wide
                     label={label(row, 'Purpose')}
                     shown={row.purpose}
                     onCommit={(text) => edit(row, { purpose: text })}
@@ -155,6 +156,7 @@ export function ScheduleTable() {
                 <td>{formatWeight(row.weightKg, document.displayUnits)}</td>
                 <td>
                   <ScheduleCell
+                    wide
                     label={label(row, 'Notes')}
                     shown={row.notes}
                     onCommit={(text) => edit(row, { notes: text })}

@@ -1,9 +1,10 @@
-import { mkdirSync, writeFileSync } from 'node:fs';
+import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { launchBrowser, recordPageProblems } from './support/browser';
-import { createShowFromDemo, readDemo } from './support/shows';
+import { createShowFromDemo, readDemo, showUrl } from './support/shows';
+import { parseCsv } from '@/lib/plot/csv';
 
 const artifactsDir = path.resolve(import.meta.dirname, '..', '..', 'test-artifacts');
 
@@ -103,6 +104,108 @@ describe('print view', () => {
     const boxes = mediaBoxes(await page.pdf({ preferCSSPageSize: true }));
     expect(boxes.length).toBeGreaterThanOrEqual(1);
     expect(boxes.every(([w, h]) => w === 612 && h === 792)).toBe(true);
+    await page.close();
+  });
+});
+
+/** Width and height from a PNG's IHDR chunk (PNG spec: big-endian at bytes 16 and 20). */
+function pngHeaderSize(bytes: Buffer): { width: number; height: number } {
+  expect(bytes.subarray(1, 4).toString('latin1')).toBe('PNG');
+  expect(bytes.subarray(12, 16).toString('latin1')).toBe('IHDR');
+  return { width: bytes.readUInt32BE(16), height: bytes.readUInt32BE(20) };
+}
+
+describe('paperwork in the editor', () => {
+  it('exports CSV and a PNG of the asked size, opens print, and refuses a bad plot file without change', async () => {
+    const baseUrl = inject('baseUrl');
+    const demo = readDemo('conference.json');
+    const id = await createShowFromDemo(baseUrl, 'conference.json');
+    const page = await browser.newPage({ viewport: { width: 1440, height: 900 }, acceptDownloads: true });
+    const problems = recordPageProblems(page);
+    await page.goto(showUrl(baseUrl, id), { waitUntil: 'load' });
+    const canvas = page.getByTestId('plan-canvas');
+    await canvas.locator('canvas').first().waitFor({ state: 'visible' });
+    await page.getByText('Paperwork', { exact: true }).click();
+
+    // The print view link carries the choices (the demo is in feet, so Letter is offered first).
+    expect(await page.getByRole('link', { name: 'Open print view' }).getAttribute('href')).toBe(
+      `/shows/${id}/print?sheet=all&paper=letter`,
+    );
+
+    // PNG at 4×: the file's header gives 4 × the canvas's CSS size, as the menu says.
+    await page.getByLabel('Plan PNG at').selectOption('4');
+    const box = await canvas.evaluate((element) => ({
+      width: element.clientWidth,
+      height: element.clientHeight,
+    }));
+    const expected = { width: box.width * 4, height: box.height * 4 };
+    expect(await page.getByTestId('png-size').innerText()).toContain(
+      `${expected.width} × ${expected.height} px`,
+    );
+    const [png] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('button', { name: 'Save PNG' }).click(),
+    ]);
+    expect(pngHeaderSize(readFileSync(await png.path()))).toEqual(expected);
+    mkdirSync(artifactsDir, { recursive: true });
+    await png.saveAs(path.join(artifactsDir, 'editor-plan-4x.png'));
+
+    // CSV of the schedule: every unit once, read back field by field.
+    const [csv] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('button', { name: 'Fixture schedule (CSV)' }).click(),
+    ]);
+    const cells = parseCsv(readFileSync(await csv.path(), 'utf8'));
+    const idColumn = cells[0].indexOf('Fixture id');
+    expect(
+      cells
+        .slice(1)
+        .map((row) => row[idColumn])
+        .sort(),
+    ).toEqual(demo.fixtures.map((unit: { id: string }) => unit.id).sort());
+    const purposeColumn = cells[0].indexOf('Purpose');
+    const first = cells.find((row) => row[idColumn] === demo.fixtures[0].id);
+    expect(first?.[purposeColumn]).toBe(demo.fixtures[0].purpose);
+
+    // A bad plot file: every problem with its path, and the plot is left as it was.
+    const bad = structuredClone(demo);
+    bad.fixtures[0].levelPct = 'full';
+    await page.getByLabel('Open plot file…').setInputFiles({
+      name: 'broken.json',
+      mimeType: 'application/json',
+      buffer: Buffer.from(JSON.stringify(bad)),
+    });
+    const alert = page.locator('.plot-import-problems');
+    await alert.waitFor();
+    expect(await alert.innerText()).toContain('fixtures[0].levelPct: must be a number');
+    expect(await alert.innerText()).toContain('nothing was changed');
+    expect(await page.locator('.editor-show').innerText()).toContain(demo.name);
+
+    // A good file replaces the plot after asking; undo brings the old plot back.
+    const other = readDemo('interview.json');
+    page.once('dialog', (dialog) => void dialog.accept());
+    await page.getByLabel('Open plot file…').setInputFiles({
+      name: 'interview.json',
+      mimeType: 'application/json',
+      buffer: Buffer.from(JSON.stringify(other)),
+    });
+    await page.getByRole('button', { name: 'Replace this plot…' }).click();
+    await expect.poll(() => page.locator('.editor-show').innerText()).toContain(other.name);
+    await page.getByRole('button', { name: 'Undo' }).click();
+    await expect.poll(() => page.locator('.editor-show').innerText()).toContain(demo.name);
+
+    // The schedule and focus chart views list every unit.
+    await page.getByText('Paperwork', { exact: true }).click();
+    await page.getByRole('tab', { name: 'Schedule' }).click();
+    expect(await page.locator('.schedule-table tbody tr').count()).toBe(demo.fixtures.length);
+    await page.screenshot({ path: path.join(artifactsDir, 'editor-schedule.png') });
+    await page.getByRole('tab', { name: 'Focus chart' }).click();
+    expect(await page.locator('.paperwork-view .focus-card').count()).toBe(demo.fixtures.length);
+    await page.screenshot({ path: path.join(artifactsDir, 'editor-focus.png') });
+    await page.getByRole('tab', { name: 'Plan' }).click();
+    await canvas.locator('canvas').first().waitFor({ state: 'visible' });
+    expect(problems.pageErrors).toEqual([]);
+    expect(problems.consoleErrors).toEqual([]);
     await page.close();
   });
 });
