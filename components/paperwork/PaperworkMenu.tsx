@@ -1,6 +1,6 @@
 'use client';
 
-import { useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import { savePlotText } from '@/lib/plot';
 import { focusChartCsv, scheduleCsv } from '@/lib/plot/paperwork';
 import { useEditor } from '../editor/EditorContext';
@@ -33,7 +33,26 @@ export function PaperworkMenu({ showId, planSize, planShown }: PaperworkMenuProp
   const [sheet, setSheet] = useState<PrintSheet>('all');
   const [paper, setPaper] = useState<PaperSize>(document.displayUnits === 'imperial' ? 'letter' : 'a4');
   const [scale, setScale] = useState<number>(2);
+  const [open, setOpen] = useState(false);
+  const menuRef = useRef<HTMLDetailsElement>(null);
   const stem = fileStem(document.name);
+
+  // An open menu closes on Escape or on a press anywhere outside it.
+  useEffect(() => {
+    if (!open) return;
+    const onPointer = (event: PointerEvent) => {
+      if (menuRef.current && !menuRef.current.contains(event.target as Node)) setOpen(false);
+    };
+    const onKey = (event: KeyboardEvent) => {
+      if (event.key === 'Escape') setOpen(false);
+    };
+    window.addEventListener('pointerdown', onPointer);
+    window.addEventListener('keydown', onKey);
+    return () => {
+      window.removeEventListener('pointerdown', onPointer);
+      window.removeEventListener('keydown', onKey);
+    };
+  }, [open]);
   const size = pngSize(planSize.width, planSize.height, scale);
 
   const savePng = async () => {
@@ -48,7 +67,12 @@ export function PaperworkMenu({ showId, planSize, planShown }: PaperworkMenuProp
   };
 
   return (
-    <details className="paperwork-menu">
+    <details
+      ref={menuRef}
+      className="paperwork-menu"
+      open={open}
+      onToggle={(event) => setOpen(event.currentTarget.open)}
+    >
       <summary>Paperwork</summary>
       <div className="paperwork-panel" role="group" aria-label="Paperwork">
         <section aria-label="Print">

@@ -3,13 +3,13 @@
 import { useRouter } from 'next/navigation';
 import { type ChangeEvent, useState } from 'react';
 import { type PlotDocument, loadPlotText, replacePlot } from '@/lib/plot';
-import { callShowsApi, jsonBody } from '../shows/showsApi';
+import { callShowsApi } from '../shows/showsApi';
 import { useEditor } from '../editor/EditorContext';
 
 type Pending =
   | { kind: 'none' }
   | { kind: 'bad'; fileName: string; errors: string[] }
-  | { kind: 'ready'; fileName: string; document: PlotDocument; migrations: string[] };
+  | { kind: 'ready'; fileName: string; text: string; document: PlotDocument; migrations: string[] };
 
 /**
  * Open a plot file. The file is checked first; a bad file shows every problem with its path and
@@ -26,23 +26,32 @@ export function PlotFileImport() {
     const file = event.target.files?.[0];
     event.target.value = '';
     if (!file) return;
-    const loaded = loadPlotText(await file.text());
+    const text = await file.text();
+    const loaded = loadPlotText(text);
     setPending(
       loaded.ok
-        ? { kind: 'ready', fileName: file.name, document: loaded.document, migrations: loaded.migrations }
+        ? {
+            kind: 'ready',
+            fileName: file.name,
+            text,
+            document: loaded.document,
+            migrations: loaded.migrations,
+          }
         : { kind: 'bad', fileName: file.name, errors: loaded.errors },
     );
   };
 
-  const openAsNew = async (next: PlotDocument) => {
+  /** The server's import route checks the file again and records the show as imported. */
+  const openAsNew = async (fileName: string, text: string) => {
     setBusy(true);
-    const answer = await callShowsApi<{ show: { id: string } }>(
-      '/api/shows',
-      jsonBody('POST', { document: next, origin: 'imported' }),
-    );
+    const answer = await callShowsApi<{ show: { id: string } }>('/api/shows/import', {
+      method: 'POST',
+      headers: { 'Content-Type': 'application/json' },
+      body: text,
+    });
     setBusy(false);
     if (!answer.ok) {
-      setPending({ kind: 'bad', fileName: next.name, errors: [answer.message, ...answer.problems] });
+      setPending({ kind: 'bad', fileName, errors: [answer.message, ...answer.problems] });
       return;
     }
     router.push(`/shows/${answer.body.show.id}`);
@@ -86,7 +95,11 @@ export function PlotFileImport() {
             {pending.fileName}: “{pending.document.name}”, {pending.document.fixtures.length} units
             {pending.migrations.length > 0 ? ` (brought up to date: ${pending.migrations.join('; ')})` : ''}.
           </p>
-          <button type="button" disabled={busy} onClick={() => void openAsNew(pending.document)}>
+          <button
+            type="button"
+            disabled={busy}
+            onClick={() => void openAsNew(pending.fileName, pending.text)}
+          >
             Open as a new show
           </button>
           <button type="button" disabled={busy} onClick={() => replace(pending.document, pending.fileName)}>

@@ -134,10 +134,11 @@ describe('paperwork in the editor', () => {
 
     // PNG at 4×: the file's header gives 4 × the canvas's CSS size, as the menu says.
     await page.getByLabel('Plan PNG at').selectOption('4');
-    const box = await canvas.evaluate((element) => ({
-      width: element.clientWidth,
-      height: element.clientHeight,
-    }));
+    // The stage's size is that of its drawn <canvas> in CSS px (Konva sizes it to whole pixels).
+    const box = await canvas
+      .locator('canvas')
+      .first()
+      .evaluate((element) => ({ width: element.clientWidth, height: element.clientHeight }));
     const expected = { width: box.width * 4, height: box.height * 4 };
     expect(await page.getByTestId('png-size').innerText()).toContain(
       `${expected.width} × ${expected.height} px`,
@@ -194,8 +195,22 @@ describe('paperwork in the editor', () => {
     await page.getByRole('button', { name: 'Undo' }).click();
     await expect.poll(() => page.locator('.editor-show').innerText()).toContain(demo.name);
 
-    // The schedule and focus chart views list every unit.
-    await page.getByText('Paperwork', { exact: true }).click();
+    // Or it opens as a new show through the import route, and the editor goes there.
+    await page.getByLabel('Open plot file…').setInputFiles({
+      name: 'interview.json',
+      mimeType: 'application/json',
+      buffer: Buffer.from(JSON.stringify(other)),
+    });
+    await page.getByRole('button', { name: 'Open as a new show' }).click();
+    await page.waitForURL(
+      (url) => /^\/shows\/sh-[a-z0-9]{16}$/.test(url.pathname) && !url.pathname.endsWith(id),
+    );
+    await expect.poll(() => page.locator('.editor-show').innerText()).toContain(other.name);
+    await page.goBack({ waitUntil: 'load' });
+    await canvas.locator('canvas').first().waitFor({ state: 'visible' });
+    await expect.poll(() => page.locator('.editor-show').innerText()).toContain(demo.name);
+
+    // The schedule and focus chart views list every unit (the page was opened afresh: the menu is closed).
     await page.getByRole('tab', { name: 'Schedule' }).click();
     expect(await page.locator('.schedule-table tbody tr').count()).toBe(demo.fixtures.length);
     await page.screenshot({ path: path.join(artifactsDir, 'editor-schedule.png') });
