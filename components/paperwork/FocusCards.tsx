@@ -18,7 +18,7 @@ import './focusCards.css';
 const length = (valueM: number | null, units: LengthUnitSystem) =>
   valueM === null ? '—' : formatLength(valueM, units);
 
-/** A pool on the focus plane in words: "2.81 m × 3.88 m", or why it has no size. */
+/** A pool on the focus plane: "2.81 m × 3.88 m" (across × along the beam), or why it has no size. */
 function poolText(
   widthM: number | null,
   lengthM: number | null,
@@ -29,7 +29,7 @@ function poolText(
   if (state === 'misses') return 'misses the focus plane';
   if (state === 'open') return 'open: spills beyond the plane';
   if (state === 'apex-on-plane') return 'unit is in the focus plane';
-  return `${length(widthM, units)} wide × ${length(lengthM, units)} long`;
+  return `${length(widthM, units)} × ${length(lengthM, units)}`;
 }
 
 /** The lens or zoom to set: the zoom setting, else the type's spread, with its lens options. */
@@ -96,8 +96,8 @@ export function FocusCards({ document }: { document: PlotDocument }) {
     <div className="focus-chart">
       <p className="focus-legend">
         {STAGE_SIDE_LEGEND} Pan: 0° points straight downstage, + toward stage left, − toward stage right.
-        Tilt: below the horizontal. Pools on the focus plane {formatLength(document.focusPlaneHeightM, units)}{' '}
-        above the stage.
+        Tilt: below the horizontal. Pools: width across the beam × length along it, on the focus plane{' '}
+        {formatLength(document.focusPlaneHeightM, units)} above the stage.
       </p>
       {rows.length === 0 ? <p>No units hung yet.</p> : null}
       {groupByPosition(rows).map((group) => (

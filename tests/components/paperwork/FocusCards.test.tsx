@@ -21,6 +21,9 @@ describe('focus chart cards', () => {
     // Throw √35.36 = 5.95 m, pan 180° (straight upstage), tilt atan(4.4/4) = 47.7° (by hand).
     expect(cards[0].textContent).toContain('5.95 m');
     expect(cards[0].textContent).toContain('180° · 47.7° down');
+    // Beam pool on the 1.6 m plane, tilted-cone formulas (REFERENCE-CHECKS §3): width 2.808 m, far − near
+    // = 6.348 − 2.467 = 3.882 m.
+    expect(cards[0].textContent).toContain('2.81 m × 3.88 m');
     // (−1.5, −0.5): 1.5 m toward stage right, 0.5 m downstage of the setting line.
     expect(cards[1].textContent).toContain('1.50 m SR');
     expect(cards[1].textContent).toContain('0.50 m DS');
