@@ -62,6 +62,7 @@ export function PlanDrawing({ document, derived }: { document: PlotDocument; der
   const line = text / 8;
   const bar = scaleBar(width, document.displayUnits);
   const footY = -bounds.minY + footM * 0.55;
+  const clipId = `plan-clip-${document.name.length}-${derived.units.length}`;
   const positions = new Map(document.positions.map((position) => [position.id, position]));
   return (
     <svg
@@ -71,6 +72,11 @@ export function PlanDrawing({ document, derived }: { document: PlotDocument; der
       aria-label={`Plan of ${document.name}`}
       preserveAspectRatio="xMidYMid meet"
     >
+      <defs>
+        <clipPath id={clipId}>
+          <rect x={bounds.minX} y={-bounds.maxY} width={width} height={bounds.maxY - bounds.minY} />
+        </clipPath>
+      </defs>
       <polygon
         points={pointsText(document.stage.outline)}
         fill="#f4f4f2"
@@ -118,21 +124,25 @@ export function PlanDrawing({ document, derived }: { document: PlotDocument; der
       >
         setting line
       </text>
-      {derived.units.map((unit) =>
-        unit.focus.beamPool &&
-        unit.focus.beamPool.state !== 'misses' &&
-        unit.focus.beamPool.polygon.length > 2 ? (
-          <polygon
-            key={`pool-${unit.fixture.id}`}
-            points={pointsText(unit.focus.beamPool.polygon)}
-            fill={unitColour(unit.fixture.filter?.displayColour)}
-            fillOpacity={0.18}
-            stroke="#8a7a50"
-            strokeOpacity={0.6}
-            strokeWidth={line * 0.8}
-          />
-        ) : null,
-      )}
+      {/* Pools, clipped to the drawing: an open pool (its edge reaches the horizon) is outlined only. */}
+      <g clipPath={`url(#${clipId})`}>
+        {derived.units.map((unit) => {
+          const pool = unit.focus.beamPool;
+          if (!pool || pool.state === 'misses' || pool.polygon.length < 3) return null;
+          return (
+            <polygon
+              key={`pool-${unit.fixture.id}`}
+              points={pointsText(pool.polygon)}
+              fill={pool.open ? 'none' : unitColour(unit.fixture.filter?.displayColour)}
+              fillOpacity={0.18}
+              stroke="#8a7a50"
+              strokeOpacity={pool.open ? 0.35 : 0.6}
+              strokeWidth={line * 0.8}
+              strokeDasharray={pool.open ? `${line * 4} ${line * 4}` : undefined}
+            />
+          );
+        })}
+      </g>
       {document.positions.map((position) => {
         const shape = position.shape;
         if (shape.kind === 'line') {
@@ -152,7 +162,13 @@ export function PlanDrawing({ document, derived }: { document: PlotDocument; der
         return (
           <g key={position.id}>
             <circle cx={at.x} cy={at.y} r={text * 0.35} fill="none" stroke="#111" strokeWidth={line * 2} />
-            <text x={at.x} y={at.y - text * 1.2} fontSize={text} textAnchor="middle" fill="#111">
+            <text
+              x={at.x}
+              y={at.y + GLYPH_M * 0.6 + text * 1.1}
+              fontSize={text}
+              textAnchor="middle"
+              fill="#111"
+            >
               {position.name}
             </text>
           </g>

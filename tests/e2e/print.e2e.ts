@@ -106,6 +106,28 @@ describe('print view', () => {
     expect(boxes.every(([w, h]) => w === 612 && h === 792)).toBe(true);
     await page.close();
   });
+
+  it('prints the plan of a metric show on its own landscape sheet', async () => {
+    const baseUrl = inject('baseUrl');
+    const demo = readDemo('studio-theatre.json');
+    const id = await createShowFromDemo(baseUrl, 'studio-theatre.json');
+    const page = await browser.newPage({
+      viewport: { width: Math.round(((297 - 20) / 25.4) * 96), height: 900 },
+    });
+    await openPrint(page, new URL(`/shows/${id}/print?sheet=plot&paper=a4`, baseUrl).toString());
+    expect(await page.locator('.print-sheet').count()).toBe(1);
+    expect(await page.getByTestId('title-block').innerText()).toContain(demo.name);
+    expect(await page.getByTestId('title-block').innerText()).toContain('metres');
+    // The scale bar is in metres for a metric show.
+    expect(await page.locator('svg.plan-drawing').innerHTML()).toMatch(/>\d+ m</);
+    await page.emulateMedia({ media: 'print' });
+    mkdirSync(artifactsDir, { recursive: true });
+    await page
+      .locator('.print-sheet-plan')
+      .screenshot({ path: path.join(artifactsDir, 'print-plan-studio.png') });
+    expect(mediaBoxes(await page.pdf({ preferCSSPageSize: true }))).toEqual([[842, 595]]);
+    await page.close();
+  });
 });
 
 /** Width and height from a PNG's IHDR chunk (PNG spec: big-endian at bytes 16 and 20). */
