@@ -4,6 +4,7 @@ import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { launchBrowser, recordPageProblems } from './support/browser';
 import { createShowFromDemo, readDemo, showUrl } from './support/shows';
+import { loadPlotText } from '@/lib/plot';
 import { parseCsv } from '@/lib/plot/csv';
 
 const artifactsDir = path.resolve(import.meta.dirname, '..', '..', 'test-artifacts');
@@ -189,6 +190,17 @@ describe('paperwork in the editor', () => {
     const purposeColumn = cells[0].indexOf('Purpose');
     const first = cells.find((row) => row[idColumn] === demo.fixtures[0].id);
     expect(first?.[purposeColumn]).toBe(demo.fixtures[0].purpose);
+
+    // The plot file saved from the editor loads back to the stored document, field for field.
+    const [json] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('button', { name: 'Save plot file (.json)' }).click(),
+    ]);
+    const reloaded = loadPlotText(readFileSync(await json.path(), 'utf8'));
+    const stored = (await (await fetch(new URL(`/api/shows/${id}`, baseUrl))).json()) as {
+      document: unknown;
+    };
+    expect(reloaded.ok && reloaded.document).toEqual(stored.document);
 
     // A bad plot file: every problem with its path, and the plot is left as it was.
     const bad = structuredClone(demo);
