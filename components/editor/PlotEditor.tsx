@@ -9,6 +9,8 @@ import type { ViewTransform } from '../canvas/viewTransform';
 import { fitView, zoomAt } from '../canvas/viewTransform';
 import { CoveragePanel } from '../coverage/CoveragePanel';
 import { PowerPanel } from '../power/PowerPanel';
+import { type MainView, MainViewSwitch, PaperworkView } from '../paperwork/MainViewSwitch';
+import { PaperworkMenu } from '../paperwork/PaperworkMenu';
 import { useCoverageMap } from '../coverage/useCoverageMap';
 import { EditorProvider, useEditor } from './EditorContext';
 import { ShowSaving } from './ShowSaving';
@@ -53,6 +55,7 @@ function EditorLayout({ show }: { show?: EditorShow }) {
   const [showAllPools, setShowAllPools] = useState(true);
   const [canvasSize, setCanvasSize] = useState({ width: 0, height: 0 });
   const [sideTab, setSideTab] = useState<SideTab>('item');
+  const [mainView, setMainView] = useState<MainView>('plan');
   const coverage = useCoverageMap(editor.document, editor.derived);
   const openTab = (tab: SideTab) => {
     setSideTab(tab);
@@ -74,6 +77,7 @@ function EditorLayout({ show }: { show?: EditorShow }) {
             {editor.document.name}
             {editor.document.venue ? <span> — {editor.document.venue}</span> : null}
           </p>
+          <PaperworkMenu showId={show?.id} planSize={canvasSize} planShown={mainView === 'plan'} />
         </div>
         <Toolbar
           tool={tool}
@@ -90,16 +94,20 @@ function EditorLayout({ show }: { show?: EditorShow }) {
       </aside>
       <main className="editor-plan">
         <h2 className="visually-hidden">Stage plan</h2>
-        <PlanCanvas
-          tool={tool}
-          view={view}
-          onViewChange={setView}
-          onCanvasSize={setCanvasSize}
-          fitRequest={fitRequest}
-          showAllPools={showAllPools}
-          lightMap={coverage.settings.visible ? coverage.map : null}
-          lightMapTargetLx={coverage.settings.targetLx}
-        />
+        <MainViewSwitch value={mainView} onChange={setMainView} />
+        {mainView !== 'plan' ? <PaperworkView view={mainView} /> : null}
+        {mainView === 'plan' ? (
+          <PlanCanvas
+            tool={tool}
+            view={view}
+            onViewChange={setView}
+            onCanvasSize={setCanvasSize}
+            fitRequest={fitRequest}
+            showAllPools={showAllPools}
+            lightMap={coverage.settings.visible ? coverage.map : null}
+            lightMapTargetLx={coverage.settings.targetLx}
+          />
+        ) : null}
       </main>
       <aside className="editor-inspector" aria-label={SIDE_TAB_NAMES[sideTab]}>
         <div className="side-tabs" role="tablist" aria-label="Side panel">

@@ -14,3 +14,4 @@ export * from './cameraExposure';
 export * from './reportText';
 export * from './powerCheck';
 export * from './powerReport';
+export * from './paperwork';

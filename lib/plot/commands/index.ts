@@ -4,3 +4,4 @@ export * from './people';
 export * from './show';
 export * from './looks';
 export * from './power';
+export * from './replace';

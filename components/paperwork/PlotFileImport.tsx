@@ -1,0 +1,115 @@
+'use client';
+
+import { useRouter } from 'next/navigation';
+import { type ChangeEvent, useState } from 'react';
+import { type PlotDocument, loadPlotText, replacePlot } from '@/lib/plot';
+import { callShowsApi } from '../shows/showsApi';
+import { useEditor } from '../editor/EditorContext';
+
+type Pending =
+  | { kind: 'none' }
+  | { kind: 'bad'; fileName: string; errors: string[] }
+  | { kind: 'ready'; fileName: string; text: string; document: PlotDocument; migrations: string[] };
+
+/**
+ * Open a plot file. The file is checked first; a bad file shows every problem with its path and
+ * changes nothing. A good one opens as a new show, or replaces this plot after asking (one undoable
+ * step; the replaced plot also stays in the show's saved history).
+ */
+export function PlotFileImport() {
+  const { run, setMessage, document } = useEditor();
+  const router = useRouter();
+  const [pending, setPending] = useState<Pending>({ kind: 'none' });
+  const [busy, setBusy] = useState(false);
+
+  const pick = async (event: ChangeEvent<HTMLInputElement>) => {
+    const file = event.target.files?.[0];
+    event.target.value = '';
+    if (!file) return;
+    const text = await file.text();
+    const loaded = loadPlotText(text);
+    setPending(
+      loaded.ok
+        ? {
+            kind: 'ready',
+            fileName: file.name,
+            text,
+            document: loaded.document,
+            migrations: loaded.migrations,
+          }
+        : { kind: 'bad', fileName: file.name, errors: loaded.errors },
+    );
+  };
+
+  /** The server's import route checks the file again and records the show as imported. */
+  const openAsNew = async (fileName: string, text: string) => {
+    setBusy(true);
+    const answer = await callShowsApi<{ show: { id: string } }>('/api/shows/import', {
+      method: 'POST',
+      headers: { 'Content-Type': 'application/json' },
+      body: text,
+    });
+    setBusy(false);
+    if (!answer.ok) {
+      setPending({ kind: 'bad', fileName, errors: [answer.message, ...answer.problems] });
+      return;
+    }
+    router.push(`/shows/${answer.body.show.id}`);
+  };
+
+  const replace = (next: PlotDocument, fileName: string) => {
+    const ok = window.confirm(
+      `Replace “${document.name}” with “${next.name}” from ${fileName}? Undo (Ctrl+Z) brings the current plot back, and its saved revisions stay in the show’s history.`,
+    );
+    if (!ok) return;
+    const result = run(replacePlot, { document: next });
+    if (result.ok) {
+      setPending({ kind: 'none' });
+      setMessage(`Replaced the plot with ${next.name} from ${fileName}. Undo brings the previous plot back.`);
+    }
+  };
+
+  return (
+    <div className="plot-import">
+      <label className="paperwork-file">
+        Open plot file…
+        <input type="file" accept=".json,application/json" onChange={(event) => void pick(event)} />
+      </label>
+      {pending.kind === 'bad' ? (
+        <div className="plot-import-problems" role="alert">
+          <p>{pending.fileName} cannot be opened; nothing was changed:</p>
+          <ul>
+            {pending.errors.slice(0, 20).map((line) => (
+              <li key={line}>{line}</li>
+            ))}
+          </ul>
+          {pending.errors.length > 20 ? <p>… and {pending.errors.length - 20} more.</p> : null}
+          <button type="button" onClick={() => setPending({ kind: 'none' })}>
+            Dismiss
+          </button>
+        </div>
+      ) : null}
+      {pending.kind === 'ready' ? (
+        <div className="plot-import-choice" role="group" aria-label="Open the plot file">
+          <p>
+            {pending.fileName}: “{pending.document.name}”, {pending.document.fixtures.length} units
+            {pending.migrations.length > 0 ? ` (brought up to date: ${pending.migrations.join('; ')})` : ''}.
+          </p>
+          <button
+            type="button"
+            disabled={busy}
+            onClick={() => void openAsNew(pending.fileName, pending.text)}
+          >
+            Open as a new show
+          </button>
+          <button type="button" disabled={busy} onClick={() => replace(pending.document, pending.fileName)}>
+            Replace this plot…
+          </button>
+          <button type="button" disabled={busy} onClick={() => setPending({ kind: 'none' })}>
+            Cancel
+          </button>
+        </div>
+      ) : null}
+    </div>
+  );
+}

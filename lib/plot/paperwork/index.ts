@@ -1,0 +1,4 @@
+export * from './schedule';
+export * from './focusChart';
+export * from './stageSide';
+export * from './csvSheets';
