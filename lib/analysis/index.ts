@@ -6,3 +6,4 @@ export * from './subjectLight';
 export * from './pointLight';
 export * from './subjectLighting';
 export * from './coverage';
+export * from './balance';

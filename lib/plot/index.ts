@@ -12,3 +12,4 @@ export * from './library';
 export * from './report';
 export * from './cameraExposure';
 export * from './reportText';
+export * from './balance';
