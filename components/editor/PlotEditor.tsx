@@ -7,6 +7,7 @@ import { Inspector } from '../panels/Inspector';
 import { ListsPanel } from '../panels/ListsPanel';
 import type { ViewTransform } from '../canvas/viewTransform';
 import { fitView, zoomAt } from '../canvas/viewTransform';
+import { BalancePanel } from '../balance/BalancePanel';
 import { CoveragePanel } from '../coverage/CoveragePanel';
 import { useCoverageMap } from '../coverage/useCoverageMap';
 import { EditorProvider, useEditor } from './EditorContext';
@@ -27,6 +28,13 @@ export interface EditorShow {
   readonly revision: number;
 }
 
+type SideTab = 'item' | 'light' | 'balance';
+const SIDE_TAB_NAMES: Record<SideTab, string> = {
+  item: 'Selected item',
+  light: 'Light map',
+  balance: 'Balance',
+};
+
 /** The whole editing screen for one plot. */
 export function PlotEditor({ initialDocument, show }: { initialDocument: PlotDocument; show?: EditorShow }) {
   return (
@@ -44,9 +52,9 @@ function EditorLayout({ show }: { show?: EditorShow }) {
   const [fitRequest, setFitRequest] = useState(0);
   const [showAllPools, setShowAllPools] = useState(true);
   const [canvasSize, setCanvasSize] = useState({ width: 0, height: 0 });
-  const [sideTab, setSideTab] = useState<'item' | 'light'>('item');
+  const [sideTab, setSideTab] = useState<SideTab>('item');
   const coverage = useCoverageMap(editor.document, editor.derived);
-  const openTab = (tab: 'item' | 'light') => {
+  const openTab = (tab: SideTab) => {
     setSideTab(tab);
     coverage.setPanelOpen(tab === 'light');
   };
@@ -93,7 +101,7 @@ function EditorLayout({ show }: { show?: EditorShow }) {
           lightMapTargetLx={coverage.settings.targetLx}
         />
       </main>
-      <aside className="editor-inspector" aria-label={sideTab === 'item' ? 'Selected item' : 'Light map'}>
+      <aside className="editor-inspector" aria-label={SIDE_TAB_NAMES[sideTab]}>
         <div className="side-tabs" role="tablist" aria-label="Side panel">
           <button type="button" role="tab" aria-selected={sideTab === 'item'} onClick={() => openTab('item')}>
             Selected item
@@ -106,9 +114,19 @@ function EditorLayout({ show }: { show?: EditorShow }) {
           >
             Light map
           </button>
+          <button
+            type="button"
+            role="tab"
+            aria-selected={sideTab === 'balance'}
+            onClick={() => openTab('balance')}
+          >
+            Balance
+          </button>
         </div>
         {sideTab === 'item' ? (
           <Inspector />
+        ) : sideTab === 'balance' ? (
+          <BalancePanel />
         ) : (
           <CoveragePanel
             settings={coverage.settings}

@@ -77,6 +77,8 @@ export function subjectLighting(
   viewpoint: Vec3 | null,
   fixtures: readonly RigFixture[],
   overrides: Readonly<Record<string, LightRole>> = {},
+  /** 'faces' skips the cylindrical figures (left at 0), for callers that need only light and roles. */
+  figures: 'all' | 'faces' = 'all',
 ): SubjectLighting {
   const facePoint = vec3(subject.mark.x, subject.mark.y, subject.faceHeightM);
   let viewAxis = bearingDirection(subject.facingDeg);
@@ -120,14 +122,10 @@ export function subjectLighting(
             ),
           )
         : 0;
-    const { cylindricalLx, semiCylindricalLx } = cylindricalFigures(
-      fixture,
-      facePoint,
-      viewAxis,
-      toSource,
-      planLength,
-      distance,
-    );
+    const { cylindricalLx, semiCylindricalLx } =
+      figures === 'all'
+        ? cylindricalFigures(fixture, facePoint, viewAxis, toSource, planLength, distance)
+        : { cylindricalLx: 0, semiCylindricalLx: 0 };
     return {
       fixtureId: fixture.id,
       azimuthDeg,

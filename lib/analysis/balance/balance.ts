@@ -143,10 +143,10 @@ function contributions(
   const now = units.map((unit) =>
     atFraction(unit.atFull, lightFractionAtLevel(unit.levelPct, unit.dimmingCurve)),
   );
-  let lighting = subjectLighting(subject.placement, viewpoint, now, subject.roleOverrides);
+  let lighting = subjectLighting(subject.placement, viewpoint, now, subject.roleOverrides, 'faces');
   if (!lighting.sources.some((source) => source.role === 'key' && source.faceLx > 0)) {
     const full = units.map((unit) => unit.atFull);
-    lighting = subjectLighting(subject.placement, viewpoint, full, subject.roleOverrides);
+    lighting = subjectLighting(subject.placement, viewpoint, full, subject.roleOverrides, 'faces');
   }
   const roles = Object.fromEntries(lighting.sources.map((source) => [source.fixtureId, source.role]));
   const backNormal = { x: -lighting.viewAxis.x, y: -lighting.viewAxis.y, z: 0 };
