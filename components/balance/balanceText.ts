@@ -7,7 +7,9 @@ type Units = 'metric' | 'imperial';
 const ROLE_LIGHT = { key: 'key light', fill: 'fill light', back: 'back light' } as const;
 
 export function stopsText(value: number | null): string {
-  return value === null ? '—' : `${value >= 0 ? '+' : ''}${value.toFixed(2)} stops`;
+  if (value === null) return '—';
+  const shown = Math.abs(value) < 0.005 ? 0 : value; // no "−0.00"
+  return `${shown >= 0 ? '+' : ''}${shown.toFixed(2)} stops`;
 }
 
 /** "Host: key light 180 lx of 250 lx (−0.47 stops): …why". */

@@ -16,7 +16,9 @@ import { Readout } from './Readout';
 import { PanelSection } from './PanelSection';
 
 function stopsText(value: number | null): string {
-  return value === null ? '—' : `${value >= 0 ? '+' : ''}${value.toFixed(2)} stops`;
+  if (value === null) return '—';
+  const shown = Math.abs(value) < 0.005 ? 0 : value; // no "−0.00"
+  return `${shown >= 0 ? '+' : ''}${shown.toFixed(2)} stops`;
 }
 
 /** The light on one subject from every source, with roles, ratios and (for a camera) exposure. */
