@@ -100,6 +100,9 @@ export function BalanceProposal({
             <strong>Out of reach</strong> (no level is set above 100 %). Throw and beam figures are on-axis
             estimates: light falls with the square of the throw, and a narrower beam of the same lumens has a
             higher peak.
+            {result.subjects.some((subject) => subject.keyOutOfReach)
+              ? ' Where the key falls short, fill and back follow the key the units can give, so the ratios hold.'
+              : ''}
           </p>
           <ul>
             {misses.map(({ subject, target }) => (

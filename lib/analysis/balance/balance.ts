@@ -9,7 +9,9 @@
  * targets of every chosen subject are solved at once by bounded least squares, fractions in [0, 1],
  * each residual divided by its target (so a miss counts as a share of the target, near stops for
  * small misses). Fractions go back to levels through the dimming curve, rounded to 0.1 %, and the
- * figures returned are those at the rounded levels. A target missed by more than MISS_TOLERANCE_STOPS
+ * figures returned are those at the rounded levels. Where a subject's key is out of reach (its key
+ * units at 100 %), the solve runs again with that subject's key at what the units give, so fill and
+ * back keep the wanted ratios to the key there is. A target missed by more than MISS_TOLERANCE_STOPS
  * is reported with advice (see advice.ts).
  */
 import type { Vec3 } from '../../geometry/vector';
@@ -91,6 +93,11 @@ export interface BalancedSubject {
   readonly lightingRatio: number | null;
   readonly backToKeyStops: number | null;
   readonly targets: readonly BalanceTarget[];
+  /**
+   * True when the wanted key is out of reach (its units at 100 %): fill and back were then balanced
+   * against the key the units can give, so the ratios hold while the key falls short.
+   */
+  readonly keyOutOfReach: boolean;
   /** Each unit's role on this subject as used by the solve. */
   readonly roles: Readonly<Record<string, LightRole>>;
 }
@@ -196,45 +203,63 @@ export function solveBalance(request: BalanceRequest): BalanceResult {
     return role === 'back' ? entry.back[j] : entry.face[j];
   };
 
-  const rows: Row[] = subjects.flatMap((_, s) => {
-    const wanted: Row[] = [{ subject: s, role: 'key', targetLx: request.keyLx }];
-    if (request.keyOverFill !== null)
-      wanted.push({ subject: s, role: 'fill', targetLx: request.keyLx / request.keyOverFill });
-    if (request.backOverKeyStops !== null)
-      wanted.push({ subject: s, role: 'back', targetLx: request.keyLx * 2 ** request.backOverKeyStops });
-    return wanted;
-  });
+  // Key wanted on each subject; lowered below to what the units can give when it is out of reach.
+  const rowsFor = (keyTargets: readonly number[]): Row[] =>
+    subjects.flatMap((_, s) => {
+      const key = keyTargets[s];
+      const wanted: Row[] = [{ subject: s, role: 'key', targetLx: key }];
+      if (request.keyOverFill !== null)
+        wanted.push({ subject: s, role: 'fill', targetLx: key / request.keyOverFill });
+      if (request.backOverKeyStops !== null)
+        wanted.push({ subject: s, role: 'back', targetLx: key * 2 ** request.backOverKeyStops });
+      return wanted;
+    });
 
   const free = units.map((unit, j) => j).filter((j) => units[j].mayChange);
-  const matrix = rows.map((row) => free.map((j) => lightInRole(row.subject, row.role, j) / row.targetLx));
-  const rhs = rows.map((row) => {
-    const fixed = units.reduce(
-      (sum, unit, j) => (unit.mayChange ? sum : sum + lightInRole(row.subject, row.role, j) * fractions[j]),
-      0,
-    );
-    return (row.targetLx - fixed) / row.targetLx;
-  });
-  const solved = boundedLeastSquares({
-    matrix,
-    rhs,
-    lower: free.map(() => 0),
-    upper: free.map(() => 1),
-    start: free.map((j) => fractions[j]),
-  });
+  const solveRows = (rows: readonly Row[]) => {
+    const matrix = rows.map((row) => free.map((j) => lightInRole(row.subject, row.role, j) / row.targetLx));
+    const rhs = rows.map((row) => {
+      const fixed = units.reduce(
+        (sum, unit, j) => (unit.mayChange ? sum : sum + lightInRole(row.subject, row.role, j) * fractions[j]),
+        0,
+      );
+      return (row.targetLx - fixed) / row.targetLx;
+    });
+    const solved = boundedLeastSquares({
+      matrix,
+      rhs,
+      lower: free.map(() => 0),
+      upper: free.map(() => 1),
+      start: free.map((j) => fractions[j]),
+    });
+    const levels: Record<string, number> = {};
+    const proposed = [...fractions];
+    for (const [index, j] of free.entries()) {
+      const level = Math.min(
+        100,
+        Math.round(levelForLightFraction(solved.x[index], units[j].dimmingCurve) * 10) / 10,
+      );
+      levels[units[j].atFull.id] = level;
+      proposed[j] = lightFractionAtLevel(level, units[j].dimmingCurve);
+    }
+    return { levels, proposed };
+  };
+  const sumRoleAt = (fractionsAt: readonly number[], s: number, role: BalancedRole) =>
+    units.reduce((sum, _, j) => sum + lightInRole(s, role, j) * fractionsAt[j], 0);
 
-  const levels: Record<string, number> = {};
-  const proposed = [...fractions];
-  for (const [index, j] of free.entries()) {
-    const level = Math.min(
-      100,
-      Math.round(levelForLightFraction(solved.x[index], units[j].dimmingCurve) * 10) / 10,
-    );
-    levels[units[j].atFull.id] = level;
-    proposed[j] = lightFractionAtLevel(level, units[j].dimmingCurve);
-  }
-
-  const sumRole = (s: number, role: BalancedRole) =>
-    units.reduce((sum, _, j) => sum + lightInRole(s, role, j) * proposed[j], 0);
+  // First pass at the wanted key. Where a subject's key is out of reach with its key units at 100 %,
+  // solve again with that subject's key at what they give, so fill and back keep the wanted ratios.
+  const first = solveRows(rowsFor(subjects.map(() => request.keyLx)));
+  const keyAtFull = (s: number) =>
+    units.some((unit, j) => unit.mayChange && lightInRole(s, 'key', j) > 0 && first.proposed[j] >= 1 - 1e-9);
+  const reachable = subjects.map((_, s) => sumRoleAt(first.proposed, s, 'key'));
+  const lowered = subjects.map(
+    (_, s) => reachable[s] > 0 && reachable[s] < request.keyLx * 2 ** -MISS_TOLERANCE_STOPS && keyAtFull(s),
+  );
+  const keyTargets = subjects.map((_, s) => (lowered[s] ? reachable[s] : request.keyLx));
+  const rows = rowsFor(keyTargets);
+  const { levels, proposed } = lowered.some(Boolean) ? solveRows(rows) : first;
+  const sumRole = (s: number, role: BalancedRole) => sumRoleAt(proposed, s, role);
   let worst: number | null = 0;
   const balanced = subjects.map((subject, s): BalancedSubject => {
     const keyLx = sumRole(s, 'key');
@@ -242,7 +267,9 @@ export function solveBalance(request: BalanceRequest): BalanceResult {
     const backLightLx = sumRole(s, 'back');
     const targets = rows
       .filter((row) => row.subject === s)
-      .map((row): BalanceTarget => {
+      .map((lowerable): BalanceTarget => {
+        // The key is judged against the wanted key even when fill and back followed a lowered one.
+        const row = lowerable.role === 'key' ? { ...lowerable, targetLx: request.keyLx } : lowerable;
         const resultLx = sumRole(s, row.role);
         const offStops = resultLx > 0 ? Math.log2(resultLx / row.targetLx) : null;
         worst = worst === null || offStops === null ? null : Math.max(worst, Math.abs(offStops));
@@ -265,6 +292,7 @@ export function solveBalance(request: BalanceRequest): BalanceResult {
       lightingRatio: fillLx > 0 ? (keyLx + fillLx) / fillLx : null,
       backToKeyStops: keyLx > 0 && backLightLx > 0 ? Math.log2(backLightLx / keyLx) : null,
       targets,
+      keyOutOfReach: lowered[s],
       roles: perSubject[s].roles,
     };
   });
@@ -277,7 +305,7 @@ export function solveBalance(request: BalanceRequest): BalanceResult {
     const changing = inRole.filter((j) => units[j].mayChange);
     if (resultLx < row.targetLx) {
       if (changing.length === 0) return { reason: { kind: 'noneMayChange' } as const, advice: [] };
-      const atFull = changing.filter((j) => proposed[j] >= 1 - 1e-9);
+      const atFull = changing.filter((j) => Math.max(proposed[j], first.proposed[j]) >= 1 - 1e-9);
       const shortfall = row.targetLx - resultLx;
       const advice = atFull.map((j) =>
         adviseUnit({

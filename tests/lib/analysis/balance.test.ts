@@ -233,6 +233,32 @@ describe('balancing levels', () => {
     expect((advice.beam?.fieldNeededDeg ?? 0) / (advice.beam?.beamNeededDeg ?? 1)).toBeCloseTo(1.5, 9);
   });
 
+  it('a key out of reach keeps the ratio: fill follows the key the units can give (3:1 → fill = key/2)', () => {
+    // Key unit at full: 282.84 lx; 400 lx wanted. Fill then balances to 282.84/2 = 141.42 lx, which the
+    // fill unit (226.27 lx at full) gives at 141.42/226.27 = 62.5 % (by hand), not the 88.4 % that
+    // 400/2 = 200 lx would need.
+    const result = solveBalance({
+      subjects: [placement],
+      viewpoint: house,
+      units: [keyUnit(), fillUnit()],
+      keyLx: 400,
+      keyOverFill: keyOverFillFromLightingRatio(3),
+      backOverKeyStops: null,
+    });
+    expect(result.levels.key).toBe(100);
+    expect(result.levels.fill).toBeCloseTo(62.5, 9);
+    const lit = result.subjects[0];
+    expect(lit.keyOutOfReach).toBe(true);
+    expect(lit.lightingRatio).toBeCloseTo(3, 2);
+    const [key, fill] = lit.targets;
+    expect(key).toMatchObject({ role: 'key', targetLx: 400, met: false, reason: { kind: 'atFull' } });
+    expect(key.offStops).toBeCloseTo(Math.log2(282.843 / 400), 4);
+    expect(fill).toMatchObject({ role: 'fill', met: true });
+    expect(fill.targetLx).toBeCloseTo(141.421, 2);
+    // The advice takes the whole shortfall on the key unit: 5·√(282.84/400) = 4.204 m.
+    expect(key.advice[0].throwNeededM).toBeCloseTo(5 * Math.sqrt(282.8427 / 400), 4);
+  });
+
   it('soft and measured sources get the throw advice only', () => {
     const soft: BalanceUnit = {
       ...unitAt('soft', vec3(0, -5, 1.7), 0, 100),
