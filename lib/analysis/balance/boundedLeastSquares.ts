@@ -1,9 +1,9 @@
 /**
  * Least squares with every unknown between bounds: minimise ‖A·x − b‖² + λ‖x − x₀‖² subject to
- * lower ≤ x ≤ upper. Small problems (tens of unknowns): projected coordinate descent, each step the
- * exact minimum along one unknown clamped to its bounds (converges for this convex problem), then an
- * active-set polish: with the unknowns found at a bound held there, the free ones are solved exactly
- * from the normal equations and kept when they stay inside their bounds and lower the objective.
+ * lower ≤ x ≤ upper. Small problems (tens to a few hundred unknowns): projected coordinate descent,
+ * each step the exact minimum along one unknown clamped to its bounds, finds a good start with a
+ * bounded amount of work; a primal active-set method (see polish) then finishes exactly. The better
+ * of the two by the objective is returned.
  *
  * The small λ pulls unknowns the equations do not decide (a unit that lights nothing asked for, or
  * two units that could share one target) toward x₀, so the answer is unique and changes little.
@@ -29,8 +29,10 @@ export interface BoundedLeastSquaresResult {
   readonly sweeps: number;
 }
 
-const MAX_SWEEPS = 20000;
-const STEP_TOLERANCE = 1e-14;
+/** Coordinate sweeps stop when no unknown moves more than this (levels are kept to 0.1 %, 1e-3). */
+const STEP_TOLERANCE = 1e-12;
+/** At most this many multiply-adds in the sweeps (n² each), so a large rig cannot stall the editor. */
+const WORK_LIMIT = 1e7;
 
 export function boundedLeastSquares(input: BoundedLeastSquaresInput): BoundedLeastSquaresResult {
   const { matrix, rhs, lower, upper, start } = input;
@@ -67,7 +69,8 @@ export function boundedLeastSquares(input: BoundedLeastSquaresInput): BoundedLea
 
   const x = start.map((value, j) => Math.min(upper[j], Math.max(lower[j], value)));
   let sweeps = 0;
-  for (; sweeps < MAX_SWEEPS; sweeps += 1) {
+  const maxSweeps = Math.max(50, Math.min(20000, Math.floor(WORK_LIMIT / Math.max(1, n * n))));
+  for (; sweeps < maxSweeps; sweeps += 1) {
     let largestStep = 0;
     for (let j = 0; j < n; j += 1) {
       let gradient = -linear[j];
@@ -84,30 +87,77 @@ export function boundedLeastSquares(input: BoundedLeastSquaresInput): BoundedLea
   return { x: best, residualNorm: residualNorm(matrix, rhs, best), sweeps };
 }
 
-/** Solve the free unknowns exactly with the others held at their bounds; null when that leaves the box. */
+/**
+ * Primal active-set method for the box-constrained quadratic ½xᵀHx − gᵀx (H positive definite),
+ * from a feasible start: solve the free unknowns exactly with the others held at their bounds; if that
+ * leaves the box, step toward it as far as the first bound and hold that unknown there; at the
+ * optimum of the free set, free the held unknowns whose gradients want them off their bounds (the
+ * optimality conditions), until none does. Null if a system is singular.
+ */
 function polish(
   hessian: readonly (readonly number[])[],
   linear: readonly number[],
-  x: readonly number[],
+  start: readonly number[],
   lower: readonly number[],
   upper: readonly number[],
 ): number[] | null {
+  const n = start.length;
+  const x = [...start];
   const span = (j: number) => Math.max(1, Math.abs(upper[j] - lower[j]));
-  const free = x
-    .map((value, j) => j)
-    .filter((j) => x[j] > lower[j] + 1e-9 * span(j) && x[j] < upper[j] - 1e-9 * span(j));
-  if (free.length === 0) return null;
-  const held = x.map((value, j) => (free.includes(j) ? 0 : value));
-  const system = free.map((j) => free.map((k) => hessian[j][k]));
-  const right = free.map((j) => linear[j] - hessian[j].reduce((sum, value, k) => sum + value * held[k], 0));
-  const solved = solveLinear(system, right);
-  if (!solved) return null;
-  const result = [...held];
-  for (const [index, j] of free.entries()) {
-    if (solved[index] < lower[j] || solved[index] > upper[j]) return null;
-    result[j] = solved[index];
+  const free = new Set(
+    x
+      .map((value, j) => j)
+      .filter((j) => x[j] > lower[j] + 1e-12 * span(j) && x[j] < upper[j] - 1e-12 * span(j)),
+  );
+  const gradientScale = 1e-12 * (1 + Math.max(...linear.map(Math.abs)));
+  for (let iteration = 0; iteration < 3 * n + 10; iteration += 1) {
+    const freeList = [...free];
+    if (freeList.length > 0) {
+      const right = freeList.map(
+        (j) => linear[j] - hessian[j].reduce((sum, value, k) => (free.has(k) ? sum : sum + value * x[k]), 0),
+      );
+      const solved = solveLinear(
+        freeList.map((j) => freeList.map((k) => hessian[j][k])),
+        right,
+      );
+      if (!solved) return null;
+      // Step toward the free optimum, stopping at the first bound in the way.
+      let step = 1;
+      let blocking = -1;
+      for (const [index, j] of freeList.entries()) {
+        const change = solved[index] - x[j];
+        if (solved[index] < lower[j] && change < 0) {
+          const reach = (lower[j] - x[j]) / change;
+          if (reach < step) [step, blocking] = [reach, j];
+        } else if (solved[index] > upper[j] && change > 0) {
+          const reach = (upper[j] - x[j]) / change;
+          if (reach < step) [step, blocking] = [reach, j];
+        }
+      }
+      for (const [index, j] of freeList.entries()) x[j] += Math.max(0, step) * (solved[index] - x[j]);
+      if (blocking >= 0) {
+        x[blocking] =
+          solved[freeList.indexOf(blocking)] < lower[blocking] ? lower[blocking] : upper[blocking];
+        free.delete(blocking);
+        continue;
+      }
+    }
+    // Optimal for this free set: free every held unknown whose gradient pulls it off its bound (all
+    // at once; a step that then leaves the box holds one back again).
+    let released = false;
+    for (let j = 0; j < n; j += 1) {
+      if (free.has(j) || lower[j] === upper[j]) continue;
+      let gradient = -linear[j];
+      for (let k = 0; k < n; k += 1) gradient += hessian[j][k] * x[k];
+      const pull = x[j] <= lower[j] ? -gradient : x[j] >= upper[j] ? gradient : Math.abs(gradient);
+      if (pull > gradientScale) {
+        free.add(j);
+        released = true;
+      }
+    }
+    if (!released) return x;
   }
-  return result;
+  return x;
 }
 
 /** Gaussian elimination with partial pivoting; null for a singular system. */

@@ -8,6 +8,7 @@ import {
 } from '@/lib/analysis';
 import { type Vec3, vec3 } from '@/lib/geometry';
 import { peakCandelaFromLumens } from '@/lib/photometry';
+import { seededRandom } from '@/lib/seededRandom';
 import { keyOverFillFromLightingRatio, keyOverFillFromStops, parseRatioText } from '@/lib/units';
 
 describe('least squares with bounds', () => {
@@ -310,5 +311,89 @@ describe('ratios as users give them', () => {
     expect(parseRatioText('4')).toBe(4);
     expect(parseRatioText('2:0')).toBeNull();
     expect(parseRatioText('two')).toBeNull();
+  });
+});
+
+describe('least squares with bounds on a larger problem', () => {
+  it('200 unknowns sharing one target finish quickly and meet it (one equation, many ways)', () => {
+    // Σ x_j = 50 with 0 ≤ x_j ≤ 1: any split meets it; the pull toward the start (all 0.1) spreads it
+    // evenly, so every x_j = 0.25 (by hand: 0.1 + (50 − 20)/200).
+    const n = 200;
+    const started = performance.now();
+    const { x, residualNorm } = boundedLeastSquares({
+      matrix: [Array.from({ length: n }, () => 1)],
+      rhs: [50],
+      lower: Array.from({ length: n }, () => 0),
+      upper: Array.from({ length: n }, () => 1),
+      start: Array.from({ length: n }, () => 0.1),
+    });
+    expect(performance.now() - started).toBeLessThan(2000);
+    expect(residualNorm).toBeLessThan(1e-6);
+    for (const value of x) expect(value).toBeCloseTo(0.25, 6);
+  });
+});
+
+/**
+ * Reference by exhaustion: every way of holding each unknown at its lower bound, its upper bound or
+ * free; the free ones solved from their normal equations by Cramer's rule (n ≤ 3); the best feasible
+ * point. Independent of the solver's method (no pull: the matrices here have full column rank).
+ */
+function exhaustiveBounded(matrix: number[][], rhs: number[], upper: number): number[] {
+  const n = matrix[0].length;
+  const objective = (x: number[]) =>
+    matrix.reduce((sum, row, i) => sum + (row.reduce((t, a, j) => t + a * x[j], 0) - rhs[i]) ** 2, 0);
+  const det = (m: number[][]): number =>
+    m.length === 1
+      ? m[0][0]
+      : m[0].reduce((sum, value, column) => {
+          const minor = m.slice(1).map((row) => row.filter((_, k) => k !== column));
+          return sum + (column % 2 === 0 ? 1 : -1) * value * det(minor);
+        }, 0);
+  let best: number[] | null = null;
+  for (let code = 0; code < 3 ** n; code += 1) {
+    const state = Array.from({ length: n }, (_, j) => Math.floor(code / 3 ** j) % 3); // 0 low, 1 high, 2 free
+    const x = state.map((kind) => (kind === 1 ? upper : 0));
+    const freeIds = state.flatMap((kind, j) => (kind === 2 ? [j] : []));
+    if (freeIds.length > 0) {
+      const gram = freeIds.map((j) =>
+        freeIds.map((k) => matrix.reduce((sum, row) => sum + row[j] * row[k], 0)),
+      );
+      const right = freeIds.map((j) =>
+        matrix.reduce((sum, row, i) => {
+          const held = row.reduce((t, a, k) => (state[k] === 2 ? t : t + a * x[k]), 0);
+          return sum + row[j] * (rhs[i] - held);
+        }, 0),
+      );
+      const d = det(gram);
+      if (Math.abs(d) < 1e-12) continue;
+      freeIds.forEach((j, index) => {
+        x[j] = det(gram.map((row, r) => row.map((value, c) => (c === index ? right[r] : value)))) / d;
+      });
+      if (freeIds.some((j) => x[j] < -1e-12 || x[j] > upper + 1e-12)) continue;
+    }
+    if (!best || objective(x) < objective(best) - 1e-15) best = x;
+  }
+  if (!best) throw new Error('no feasible point');
+  return best;
+}
+
+describe('least squares with bounds against an exhaustive search', () => {
+  it('agrees on 200 random problems of 1 to 3 unknowns and up to 4 equations', () => {
+    const random = seededRandom(20261202);
+    for (let trial = 0; trial < 200; trial += 1) {
+      const n = 1 + Math.floor(random() * 3);
+      const m = n + Math.floor(random() * 2);
+      const matrix = Array.from({ length: m }, () => Array.from({ length: n }, () => random() * 2 - 0.5));
+      const rhs = Array.from({ length: m }, () => random() * 3 - 1);
+      const expected = exhaustiveBounded(matrix, rhs, 1);
+      const { x } = boundedLeastSquares({
+        matrix,
+        rhs,
+        lower: Array(n).fill(0),
+        upper: Array(n).fill(1),
+        start: Array.from({ length: n }, () => random()),
+      });
+      x.forEach((value, j) => expect(value).toBeCloseTo(expected[j], 5));
+    }
   });
 });
