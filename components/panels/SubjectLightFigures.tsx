@@ -1,6 +1,6 @@
 'use client';
 
-import { useMemo } from 'react';
+import { useMemo, useState } from 'react';
 import { type LightRole, subjectLighting } from '@/lib/analysis';
 import {
   type PlotDocument,
@@ -36,6 +36,7 @@ export function SubjectLightFigures({
   const subject = document.subjects.find((candidate) => candidate.id === subjectId);
   const viewpoint = document.viewpoints.find((view) => view.id === document.mainViewpointId) ?? null;
   const { run } = useEditor();
+  const [everyUnit, setEveryUnit] = useState(false);
   const lighting = useMemo(
     () =>
       subject
@@ -56,7 +57,7 @@ export function SubjectLightFigures({
     source.role === 'back' ? source.backLx : source.role === 'top' ? source.topLx : source.faceLx;
   // Lit units, and any unit given a role by hand (so the choice can be undone even when it is dark).
   const lit = lighting.sources
-    .filter((source) => shown(source) >= 0.5 || source.overridden)
+    .filter((source) => everyUnit || shown(source) >= 0.5 || source.overridden)
     .sort((a, b) => shown(b) - shown(a));
   const largest = Math.max(1e-9, ...lit.map(shown));
   return (
@@ -124,6 +125,15 @@ export function SubjectLightFigures({
         is side; in front, the brightest is the key and its side is the key side. Choose a role beside a unit
         to set it by hand.
       </p>
+      <label className="subject-every-unit">
+        <input
+          type="checkbox"
+          aria-label="List units that give no light here too"
+          checked={everyUnit}
+          onChange={(event) => setEveryUnit(event.target.checked)}
+        />
+        List units that give no light here too
+      </label>
       <ul className="subject-bars" aria-label="Light on this subject by unit">
         {lit.map((source) => {
           const value = shown(source);

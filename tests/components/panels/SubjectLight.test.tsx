@@ -61,4 +61,15 @@ describe('the light on a subject in the inspector', () => {
     expect(value('subjectKey')).toBeCloseTo(each, 6);
     expect(view.document().subjects[0].roleOverrides).toEqual({});
   });
+
+  it('a unit that is off can be listed and given a role (the balance uses it before it is lit)', () => {
+    const view = renderWithEditor(<Inspector />, tinyPlot({ fixtures: [{ ...unit, levelPct: 0 }] }));
+    view.select(['sub-1']);
+    const bars = screen.getByRole('list', { name: 'Light on this subject by unit' });
+    expect(bars.children.length).toBe(0);
+    fireEvent.click(screen.getByLabelText('List units that give no light here too'));
+    const chooser = screen.getByRole('combobox', { name: 'Role of Front pipe #1' });
+    fireEvent.change(chooser, { target: { value: 'fill' } });
+    expect(view.document().subjects[0].roleOverrides).toEqual({ [unit.id]: 'fill' });
+  });
 });
