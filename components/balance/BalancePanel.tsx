@@ -13,16 +13,24 @@ import { LevelSetControl } from './LevelSetControl';
 import '@/components/panels/panels.css';
 import './balance.css';
 
+/** The panel's choices per open plot, kept while the side panel shows another tab. */
+const kept = new WeakMap<object, BalanceSettings>();
+
 /**
  * Balance: levels for a key light, a key:fill ratio and a back:key ratio on chosen subjects, shown
  * before they are applied in one undo step; and the show's level sets.
  */
 export function BalancePanel() {
-  const { document, selection, units } = useEditor();
-  const [settings, setSettings] = useState<BalanceSettings>(() =>
-    initialBalanceSettings(document, selection),
+  const { document, selection, units, store } = useEditor();
+  const [settings, setSettings] = useState<BalanceSettings>(
+    () => kept.get(store) ?? initialBalanceSettings(document, selection),
   );
-  const change = (changes: Partial<BalanceSettings>) => setSettings((now) => ({ ...now, ...changes }));
+  const change = (changes: Partial<BalanceSettings>) =>
+    setSettings((now) => {
+      const next = { ...now, ...changes };
+      kept.set(store, next);
+      return next;
+    });
   // One pass per change of the plot or the settings (the solve takes a few milliseconds per subject).
   const { subjectIds, mayChange, outcome } = useMemo(() => {
     const chosen = settings.subjectIds.filter((id) => document.subjects.some((person) => person.id === id));

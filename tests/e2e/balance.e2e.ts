@@ -77,6 +77,9 @@ describe('balancing the interview demo in a real browser', () => {
 
     // A key light out of reach: the panel says so with the throw that would reach it.
     await page.getByRole('tab', { name: 'Balance' }).click();
+    // The panel kept its choices while another tab was shown.
+    expect(await panel.getByLabel('Key light', { exact: true }).inputValue()).toBe('camera:vp-cam-a');
+    expect(await panel.getByLabel('Lighting ratio').inputValue()).toBe('2:1');
     await panel.getByLabel('Key light', { exact: true }).selectOption('number');
     const lux = panel.getByLabel(/^Key light \(lx\)/);
     await lux.fill('3000');
