@@ -7,6 +7,7 @@ import { Inspector } from '../panels/Inspector';
 import { ListsPanel } from '../panels/ListsPanel';
 import type { ViewTransform } from '../canvas/viewTransform';
 import { fitView, zoomAt } from '../canvas/viewTransform';
+import { BalancePanel } from '../balance/BalancePanel';
 import { CoveragePanel } from '../coverage/CoveragePanel';
 import { PowerPanel } from '../power/PowerPanel';
 import { type MainView, MainViewSwitch, PaperworkView } from '../paperwork/MainViewSwitch';
@@ -39,10 +40,19 @@ export function PlotEditor({ initialDocument, show }: { initialDocument: PlotDoc
   );
 }
 
-type SideTab = 'item' | 'light' | 'power';
+const SIDE_TABS = ['item', 'light', 'balance', 'power'] as const;
+type SideTab = (typeof SIDE_TABS)[number];
+/** The tab's words, and the panel's accessible name. */
+const SIDE_TAB_LABELS: Record<SideTab, string> = {
+  item: 'Selected item',
+  light: 'Light map',
+  balance: 'Balance',
+  power: 'Power',
+};
 const SIDE_TAB_NAMES: Record<SideTab, string> = {
   item: 'Selected item',
   light: 'Light map',
+  balance: 'Balance',
   power: 'Power and weight',
 };
 
@@ -111,30 +121,24 @@ function EditorLayout({ show }: { show?: EditorShow }) {
       </main>
       <aside className="editor-inspector" aria-label={SIDE_TAB_NAMES[sideTab]}>
         <div className="side-tabs" role="tablist" aria-label="Side panel">
-          <button type="button" role="tab" aria-selected={sideTab === 'item'} onClick={() => openTab('item')}>
-            Selected item
-          </button>
-          <button
-            type="button"
-            role="tab"
-            aria-selected={sideTab === 'light'}
-            onClick={() => openTab('light')}
-          >
-            Light map
-          </button>
-          <button
-            type="button"
-            role="tab"
-            aria-selected={sideTab === 'power'}
-            onClick={() => openTab('power')}
-          >
-            Power
-          </button>
+          {SIDE_TABS.map((tab) => (
+            <button
+              key={tab}
+              type="button"
+              role="tab"
+              aria-selected={sideTab === tab}
+              onClick={() => openTab(tab)}
+            >
+              {SIDE_TAB_LABELS[tab]}
+            </button>
+          ))}
         </div>
         {sideTab === 'item' ? (
           <Inspector />
         ) : sideTab === 'power' ? (
           <PowerPanel />
+        ) : sideTab === 'balance' ? (
+          <BalancePanel />
         ) : (
           <CoveragePanel
             settings={coverage.settings}

@@ -8,3 +8,4 @@ export * from './subjectLighting';
 export * from './coverage';
 export * from './loads';
 export * from './rigWeights';
+export * from './balance';

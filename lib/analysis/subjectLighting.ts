@@ -4,11 +4,13 @@
  * semi-cylindrical illuminance by their definitions; each source's role (key, fill, back, side, top)
  * from geometry; and the ratios in stops.
  *
- * Roles (documented rule, the user may override later): a source more than 70° above the horizontal
+ * Roles (documented rule): a source more than 70° above the horizontal
  * seen from the face is `top`; otherwise by its plan angle from the viewing axis: beyond 110° `back`,
  * 70°–110° `side`, nearer the axis `front`. The front source giving the most light on the face is the
  * `key`; other front sources on the same side of the axis are `key` too (the key side), those on the
- * other side `fill`.
+ * other side `fill`. The rule runs first on every source; then a role the user gave a source on this
+ * subject (`overrides`, fixture id → role) replaces the rule's, and key, fill and back sums follow the
+ * final roles. Each source keeps the rule's role too (`ruleRole`) and says whether it was overridden.
  */
 import { type Vec3, vec3 } from '../geometry/vector';
 import { degToRad, radToDeg } from '../numeric';
@@ -20,7 +22,12 @@ export type LightRole = 'key' | 'fill' | 'back' | 'side' | 'top';
 
 export interface SourceOnSubject {
   readonly fixtureId: string;
+  /** The role used: the user's where given, else the rule's. */
   readonly role: LightRole;
+  /** The role the geometric rule gives. */
+  readonly ruleRole: LightRole;
+  /** True when the user's role replaced the rule's (even if they agree). */
+  readonly overridden: boolean;
   /** Plan angle of the source from the viewing axis, degrees: + toward the viewer's right, ±180 behind. */
   readonly azimuthDeg: number;
   /** Angle of the source above the horizontal seen from the face, degrees. */
@@ -45,7 +52,10 @@ export interface SubjectLighting {
   /** Unit plan vector from the face toward the viewpoint (or along the facing when there is none). */
   readonly viewAxis: Vec3;
   readonly sources: readonly SourceOnSubject[];
-  readonly totals: Omit<SourceOnSubject, 'fixtureId' | 'role' | 'azimuthDeg' | 'elevationDeg'>;
+  readonly totals: Omit<
+    SourceOnSubject,
+    'fixtureId' | 'role' | 'ruleRole' | 'overridden' | 'azimuthDeg' | 'elevationDeg'
+  >;
   /** Light on the face from the key side and from the fill side, lx. */
   readonly keyLx: number;
   readonly fillLx: number;
@@ -66,6 +76,9 @@ export function subjectLighting(
   subject: SubjectPlacement,
   viewpoint: Vec3 | null,
   fixtures: readonly RigFixture[],
+  overrides: Readonly<Record<string, LightRole>> = {},
+  /** 'faces' skips the cylindrical figures (left at 0), for callers that need only light and roles. */
+  figures: 'all' | 'faces' = 'all',
 ): SubjectLighting {
   const facePoint = vec3(subject.mark.x, subject.mark.y, subject.faceHeightM);
   let viewAxis = bearingDirection(subject.facingDeg);
@@ -109,14 +122,10 @@ export function subjectLighting(
             ),
           )
         : 0;
-    const { cylindricalLx, semiCylindricalLx } = cylindricalFigures(
-      fixture,
-      facePoint,
-      viewAxis,
-      toSource,
-      planLength,
-      distance,
-    );
+    const { cylindricalLx, semiCylindricalLx } =
+      figures === 'all'
+        ? cylindricalFigures(fixture, facePoint, viewAxis, toSource, planLength, distance)
+        : { cylindricalLx: 0, semiCylindricalLx: 0 };
     return {
       fixtureId: fixture.id,
       azimuthDeg,
@@ -145,11 +154,16 @@ export function subjectLighting(
     null,
   );
   const keySide = key && key.faceLx > 0 ? Math.sign(key.azimuthDeg) || 1 : 0;
-  const sources: SourceOnSubject[] = measured.map((entry) => {
+  const ruleRoleOf = (entry: (typeof measured)[number]): LightRole => {
     const role = roleOf(entry);
-    if (role !== 'front') return { ...entry, role };
+    if (role !== 'front') return role;
     const side = Math.sign(entry.azimuthDeg) || 1;
-    return { ...entry, role: keySide !== 0 && side === keySide ? 'key' : 'fill' };
+    return keySide !== 0 && side === keySide ? 'key' : 'fill';
+  };
+  const sources: SourceOnSubject[] = measured.map((entry) => {
+    const ruleRole = ruleRoleOf(entry);
+    const given = Object.hasOwn(overrides, entry.fixtureId) ? overrides[entry.fixtureId] : undefined;
+    return { ...entry, role: given ?? ruleRole, ruleRole, overridden: given !== undefined };
   });
   const sum = (
     pick: (entry: SourceOnSubject) => number,

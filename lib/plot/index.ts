@@ -15,3 +15,4 @@ export * from './reportText';
 export * from './powerCheck';
 export * from './powerReport';
 export * from './paperwork';
+export * from './balance';

@@ -55,8 +55,16 @@ export interface ReportSubject {
   readonly totalFaceLx: number;
   /** Every source's light on the face, largest first. */
   readonly sources: readonly { readonly fixtureId: string; readonly faceLx: number }[];
-  /** Each source's role on this subject (key, fill, back, side, top), by the rule in subjectLighting. */
-  readonly roles: readonly { readonly fixtureId: string; readonly role: string }[];
+  /**
+   * Each source's role on this subject (key, fill, back, side, top): the user's where given
+   * (`overridden` true), else the rule's in subjectLighting; `ruleRole` is always the rule's.
+   */
+  readonly roles: readonly {
+    readonly fixtureId: string;
+    readonly role: string;
+    readonly ruleRole: string;
+    readonly overridden: boolean;
+  }[];
   readonly keyLx: number;
   readonly fillLx: number;
   readonly backLightLx: number;
@@ -115,6 +123,14 @@ export interface PlotReport {
   readonly mainViewpoint: string | null;
   readonly fixtures: readonly ReportFixture[];
   readonly subjects: readonly ReportSubject[];
+  /** The show's level sets; `chosen` marks the one whose levels the fixtures have now (at most one). */
+  readonly levelSets: readonly {
+    readonly id: string;
+    readonly name: string;
+    readonly chosen: boolean;
+    /** Level of each unit in the set, %, by fixture id (a unit not named is at 0 % in it). */
+    readonly levels: Readonly<Record<string, number>>;
+  }[];
   readonly coverage: ReportCoverage;
   /** Loads per circuit, phase and feeder (powerReport.ts). */
   readonly power: ReportPower;
@@ -217,14 +233,19 @@ export function buildReport(document: PlotDocument, options: ReportOptions = {})
   const camera = document.viewpoints.find((view) => view.id === document.mainViewpointId)?.camera ?? null;
   const subjects = subjectPlacements(document).map((placement, index): ReportSubject => {
     const light = subjectFaceLight(placement, viewpoint, rig);
-    const lighting = subjectLighting(placement, viewpoint, rig);
+    const lighting = subjectLighting(placement, viewpoint, rig, document.subjects[index].roleOverrides);
     return {
       id: placement.id,
       name: document.subjects[index].name,
       judgedToward: light.judgedToward,
       totalFaceLx: light.totalFaceLx,
       sources: light.sources,
-      roles: lighting.sources.map((source) => ({ fixtureId: source.fixtureId, role: source.role })),
+      roles: lighting.sources.map((source) => ({
+        fixtureId: source.fixtureId,
+        role: source.role,
+        ruleRole: source.ruleRole,
+        overridden: source.overridden,
+      })),
       keyLx: lighting.keyLx,
       fillLx: lighting.fillLx,
       backLightLx: lighting.backLightLx,
@@ -243,6 +264,12 @@ export function buildReport(document: PlotDocument, options: ReportOptions = {})
     mainViewpoint: document.viewpoints.find((view) => view.id === document.mainViewpointId)?.name ?? null,
     fixtures,
     subjects,
+    levelSets: document.levelSets.map((set) => ({
+      id: set.id,
+      name: set.name,
+      chosen: set.id === document.activeLevelSetId,
+      levels: set.levels,
+    })),
     coverage: reportCoverage(document, options),
     power: reportPower(document),
     weight: reportWeight(document),

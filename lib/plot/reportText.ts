@@ -106,12 +106,29 @@ export function formatReportText(report: PlotReport, units: DisplayUnits): strin
         }`,
       );
     }
-    const roles = new Map(subject.roles.map((entry) => [entry.fixtureId, entry.role]));
+    const roles = new Map(subject.roles.map((entry) => [entry.fixtureId, entry]));
     for (const source of subject.sources.filter((entry) => entry.faceLx >= 0.5)) {
+      const role = roles.get(source.fixtureId);
+      const roleText = !role
+        ? ''
+        : role.overridden
+          ? `${role.role} (set by hand; rule: ${role.ruleRole})`
+          : role.role;
       lines.push(
-        `    ${(names.get(source.fixtureId) ?? source.fixtureId).padEnd(labelWidth)}  ${illuminance(source.faceLx, units).padEnd(8)} ${roles.get(source.fixtureId) ?? ''}`,
+        `    ${(names.get(source.fixtureId) ?? source.fixtureId).padEnd(labelWidth)}  ${illuminance(source.faceLx, units).padEnd(8)} ${roleText}`,
       );
     }
+  }
+  lines.push('');
+  lines.push('LEVEL SETS');
+  if (report.levelSets.length === 0) lines.push('  none (the levels above are the only ones)');
+  for (const set of report.levelSets) {
+    const levels = Object.entries(set.levels)
+      .map(([fixtureId, level]) => `${names.get(fixtureId) ?? fixtureId} ${Math.round(level)} %`)
+      .join(', ');
+    lines.push(
+      `  ${set.name}${set.chosen ? ' (chosen: the levels above)' : ''}: ${levels || 'every unit at 0 %'}`,
+    );
   }
   const coverage = report.coverage;
   lines.push('');

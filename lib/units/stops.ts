@@ -26,3 +26,26 @@ export function formatRatio(ratio: number): string {
   const rounded = Math.round(ratio * 10) / 10;
   return `${Number.isInteger(rounded) ? rounded.toFixed(0) : rounded.toFixed(1)}:1`;
 }
+
+/**
+ * Key alone over fill alone from the photographers' lighting ratio (key + fill) : fill = N:1, i.e.
+ * N − 1: 2:1 is key = fill (one stop between the lit and the shaded side), 3:1 is key = 2 × fill.
+ * Null for N ≤ 1 (no key light) or a value that is not a number.
+ */
+export function keyOverFillFromLightingRatio(ratio: number): number | null {
+  return Number.isFinite(ratio) && ratio > 1 ? ratio - 1 : null;
+}
+
+/** Key alone over fill alone from key:fill in stops: 2^stops. */
+export function keyOverFillFromStops(stops: number): number | null {
+  return Number.isFinite(stops) ? 2 ** stops : null;
+}
+
+/** Reads "2:1", "2 : 1", "2.5:1" or a bare "2" as the number before the colon; null otherwise. */
+export function parseRatioText(text: string): number | null {
+  const match = /^\s*(\d+(?:\.\d+)?)\s*(?::\s*(\d+(?:\.\d+)?)\s*)?$/.exec(text);
+  if (!match) return null;
+  const first = Number(match[1]);
+  const second = match[2] === undefined ? 1 : Number(match[2]);
+  return second > 0 ? first / second : null;
+}

@@ -1,6 +1,6 @@
 // @vitest-environment jsdom
 import { afterEach, describe, expect, it } from 'vitest';
-import { cleanup, screen } from '@testing-library/react';
+import { act, cleanup, fireEvent, screen } from '@testing-library/react';
 import { Inspector } from '@/components/panels/Inspector';
 import { renderWithEditor } from './renderWithEditor';
 import { tinyPlot, unit } from '../../lib/plot/tinyPlot';
@@ -31,5 +31,45 @@ describe('the light on a subject in the inspector', () => {
       Number(document.querySelector('[data-readout="keyToFillStops"]')?.getAttribute('data-value')),
     ).toBeCloseTo(0, 9);
     expect(document.querySelector('[data-readout="keyToFillStops"]')?.textContent).toContain('2.0:1');
+  });
+
+  it("choosing a unit's role moves its light between key and fill; choosing 'by rule' undoes it", () => {
+    const left = { ...unit, id: 'fx-l', mount: { x: -2, y: -2, z: 6 } };
+    const right = { ...unit, id: 'fx-r', unit: 2, mount: { x: 2, y: -2, z: 6 } };
+    const view = renderWithEditor(<Inspector />, tinyPlot({ fixtures: [left, right] }));
+    view.select(['sub-1']);
+    const value = (name: string) =>
+      Number(document.querySelector(`[data-readout="${name}"]`)?.getAttribute('data-value'));
+    const each = value('subjectKey'); // equal units: key side = fill side = half the face light
+    expect(value('subjectFill')).toBeCloseTo(each, 6);
+    const keyUnit = screen
+      .getAllByRole('combobox')
+      .find(
+        (select) =>
+          (select as HTMLSelectElement).value === '' && select.textContent?.includes('by rule (key)'),
+      );
+    if (!keyUnit) throw new Error('no unit with the key role by rule');
+    fireEvent.change(keyUnit, { target: { value: 'fill' } });
+    // Both units now fill (by hand: 2 × each), no key light.
+    expect(value('subjectFill')).toBeCloseTo(2 * each, 6);
+    expect(value('subjectKey')).toBe(0);
+    const fixtureId = keyUnit.getAttribute('data-fixture') ?? '';
+    expect(view.document().subjects[0].roleOverrides).toEqual({ [fixtureId]: 'fill' });
+    act(() => {
+      view.editor().store.undo();
+    });
+    expect(value('subjectKey')).toBeCloseTo(each, 6);
+    expect(view.document().subjects[0].roleOverrides).toEqual({});
+  });
+
+  it('a unit that is off can be listed and given a role (the balance uses it before it is lit)', () => {
+    const view = renderWithEditor(<Inspector />, tinyPlot({ fixtures: [{ ...unit, levelPct: 0 }] }));
+    view.select(['sub-1']);
+    const bars = screen.getByRole('list', { name: 'Light on this subject by unit' });
+    expect(bars.children.length).toBe(0);
+    fireEvent.click(screen.getByLabelText('List units that give no light here too'));
+    const chooser = screen.getByRole('combobox', { name: 'Role of Front pipe #1' });
+    fireEvent.change(chooser, { target: { value: 'fill' } });
+    expect(view.document().subjects[0].roleOverrides).toEqual({ [unit.id]: 'fill' });
   });
 });

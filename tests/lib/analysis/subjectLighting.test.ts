@@ -39,6 +39,29 @@ describe('light on a subject and the roles of its sources', () => {
     expect(light.sources[0].elevationDeg).toBeCloseTo(45, 4); // 4.242 641 m offsets: 45° to 1e-5
   });
 
+  it("a user's role replaces the rule's, and the key and fill sums follow it", () => {
+    // The pair alone: 138.89 lx each (REFERENCE-CHECKS §11 [DER]); the rule makes one key, one fill.
+    const byRule = subjectLighting(subject, house, pair);
+    const ruleFill = byRule.sources.find((source) => source.role === 'fill');
+    if (!ruleFill) throw new Error('the rule gave no fill');
+    expect(byRule.sources.every((source) => !source.overridden)).toBe(true);
+    // Calling the rule's fill "key" puts both on the key side: key 277.78 lx, fill 0 (by hand: 2 × 138.89).
+    const bothKey = subjectLighting(subject, house, pair, { [ruleFill.fixtureId]: 'key' });
+    expect(bothKey.keyLx).toBeCloseTo(277.78, 2);
+    expect(bothKey.fillLx).toBe(0);
+    expect(bothKey.keyToFillStops).toBeNull();
+    const changed = bothKey.sources.find((source) => source.fixtureId === ruleFill.fixtureId);
+    expect(changed).toMatchObject({ role: 'key', ruleRole: 'fill', overridden: true });
+    // Calling it back light moves its light out of the face sums: back light is on the back of the head,
+    // which a unit in front does not reach (0 lx).
+    const asBack = subjectLighting(subject, house, pair, { [ruleFill.fixtureId]: 'back' });
+    expect(asBack.keyLx).toBeCloseTo(138.89, 2);
+    expect(asBack.fillLx).toBe(0);
+    expect(asBack.backLightLx).toBe(0);
+    // An override naming a unit that is not in the rig changes nothing.
+    expect(subjectLighting(subject, house, pair, { ghost: 'fill' }).keyLx).toBeCloseTo(138.89, 2);
+  });
+
   it('the side facing a unit gets more than the far side: the cheek turned to stage left is lit by the stage-left unit', () => {
     const light = subjectLighting(subject, house, [pair[1]]);
     // Viewer in the house looks upstage: their right is stage left (+x).

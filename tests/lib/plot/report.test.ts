@@ -128,3 +128,32 @@ describe('the report’s coverage figures', () => {
     expect(coverage.regions[0].fixtures[0].fixtureId).toBe('fx-1');
   });
 });
+
+describe('the report on roles set by hand and level sets', () => {
+  it('marks a role set by hand beside the rule’s, and lists the level sets with the chosen one', () => {
+    // The tiny plot's one unit is the key by the rule (the only front source); the user calls it fill.
+    const plot = tinyPlot({
+      subjects: [{ ...tinyPlot().subjects[0], roleOverrides: { [unit.id]: 'fill' } }],
+      levelSets: [
+        { id: 'look-1', name: 'Scene 1', levels: { [unit.id]: 100 } },
+        { id: 'look-2', name: 'Blackout', levels: {} },
+      ],
+      activeLevelSetId: 'look-1',
+    });
+    const report = buildReport(plot);
+    expect(report.subjects[0].roles).toEqual([
+      { fixtureId: unit.id, role: 'fill', ruleRole: 'key', overridden: true },
+    ]);
+    // The sums follow the final role: all 380.47 lx is fill, none key.
+    expect(report.subjects[0].keyLx).toBe(0);
+    expect(report.subjects[0].fillLx).toBeCloseTo(380.471, 3);
+    expect(report.levelSets).toEqual([
+      { id: 'look-1', name: 'Scene 1', chosen: true, levels: { [unit.id]: 100 } },
+      { id: 'look-2', name: 'Blackout', chosen: false, levels: {} },
+    ]);
+    const text = formatReportText(report, 'metric');
+    expect(text).toContain('fill (set by hand; rule: key)');
+    expect(text).toContain('Scene 1 (chosen: the levels above): Front pipe #1 100 %');
+    expect(text).toContain('Blackout: every unit at 0 %');
+  });
+});

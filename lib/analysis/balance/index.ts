@@ -1,0 +1,3 @@
+export * from './boundedLeastSquares';
+export * from './advice';
+export * from './balance';

@@ -1,0 +1,399 @@
+import { describe, expect, it } from 'vitest';
+import {
+  type BalanceUnit,
+  type RigFixture,
+  boundedLeastSquares,
+  narrowingForGain,
+  solveBalance,
+} from '@/lib/analysis';
+import { type Vec3, vec3 } from '@/lib/geometry';
+import { peakCandelaFromLumens } from '@/lib/photometry';
+import { seededRandom } from '@/lib/seededRandom';
+import { keyOverFillFromLightingRatio, keyOverFillFromStops, parseRatioText } from '@/lib/units';
+
+describe('least squares with bounds', () => {
+  it('separate unknowns are each clamped to their bounds (by hand: x = (0.3, 1))', () => {
+    const { x } = boundedLeastSquares({
+      matrix: [
+        [1, 0],
+        [0, 1],
+      ],
+      rhs: [0.3, 1.7],
+      lower: [0, 0],
+      upper: [1, 1],
+      start: [0.5, 0.5],
+    });
+    expect(x[0]).toBeCloseTo(0.3, 7);
+    expect(x[1]).toBe(1);
+  });
+
+  it('coupled unknowns inside the bounds solve exactly (by hand: x + y = 1, x − y = 0.2 → 0.6, 0.4)', () => {
+    const { x, residualNorm } = boundedLeastSquares({
+      matrix: [
+        [1, 1],
+        [1, -1],
+      ],
+      rhs: [1, 0.2],
+      lower: [0, 0],
+      upper: [1, 1],
+      start: [0, 0],
+    });
+    expect(x[0]).toBeCloseTo(0.6, 7);
+    expect(x[1]).toBeCloseTo(0.4, 7);
+    expect(residualNorm).toBeLessThan(1e-6);
+  });
+
+  it('both unknowns held at their upper bounds (by hand: x = 1, y = 1)', () => {
+    // Minimise (x − 2)² + (x + y − 2.5)² with 0 ≤ x, y ≤ 1. Unbounded: x = 2, y = 0.5. x is held at 1;
+    // then y minimises (y − 1.5)², so y = 1 at its bound; both bounds are active; residual √(1 + 0.25).
+    const { x, residualNorm } = boundedLeastSquares({
+      matrix: [
+        [1, 0],
+        [1, 1],
+      ],
+      rhs: [2, 2.5],
+      lower: [0, 0],
+      upper: [1, 1],
+      start: [0.5, 0.5],
+    });
+    expect(x).toEqual([1, 1]);
+    expect(residualNorm).toBeCloseTo(Math.sqrt(1.25), 9);
+  });
+
+  it('an upper bound active and the other unknown free inside (by hand: x = 1, y = 0.5)', () => {
+    // (x − 2)² + (x + y − 1.5)²: x held at 1, then y = 0.5 (inside).
+    const { x } = boundedLeastSquares({
+      matrix: [
+        [1, 0],
+        [1, 1],
+      ],
+      rhs: [2, 1.5],
+      lower: [0, 0],
+      upper: [1, 1],
+      start: [0, 0],
+    });
+    expect(x[0]).toBe(1);
+    expect(x[1]).toBeCloseTo(0.5, 7);
+  });
+});
+
+const subject = { id: 'p', mark: { x: 0, y: 0 }, faceHeightM: 1.7, facingDeg: 0 };
+const placement = { placement: subject, roleOverrides: {} };
+const face = vec3(0, 0, 1.7);
+const house = vec3(0, -12, 1.7);
+
+function unitAt(
+  id: string,
+  mount: Vec3,
+  peakCdAtFull: number,
+  levelPct: number,
+  extra: Partial<BalanceUnit> = {},
+): BalanceUnit {
+  const atFull: RigFixture = {
+    id,
+    mount,
+    focus: face,
+    source: {
+      kind: 'beam',
+      spread: { kind: 'round', beamAngleDeg: 20, fieldAngleDeg: 30 },
+      peakCd: peakCdAtFull,
+    },
+  };
+  return {
+    atFull,
+    levelPct,
+    dimmingCurve: 'linear',
+    mayChange: true,
+    beamSpread: { kind: 'round', beamAngleDeg: 20, fieldAngleDeg: 30 },
+    ...extra,
+  };
+}
+
+// 45° either side of the viewing axis, level with the face, 5 m away: E = I·cos 45°/25 on the face.
+const side = 5 / Math.SQRT2;
+const keyUnit = (level = 50) => unitAt('key', vec3(-side, -side, 1.7), 10000, level);
+const fillUnit = (level = 50) => unitAt('fill', vec3(side, -side, 1.7), 8000, level);
+const backUnit = (level = 50) => unitAt('back', vec3(0, 5, 1.7), 10000, level);
+
+describe('balancing levels', () => {
+  it('one key unit on the axis, linear dimming: level = target / light at full (100 / 400 = 25 %)', () => {
+    // 10 000 cd at 5 m straight in front, square to the face: 400 lx at full (inverse square, by hand).
+    const result = solveBalance({
+      subjects: [placement],
+      viewpoint: house,
+      units: [unitAt('front', vec3(0, -5, 1.7), 10000, 60)],
+      keyLx: 100,
+      keyOverFill: null,
+      backOverKeyStops: null,
+    });
+    expect(result.levels).toEqual({ front: 25 });
+    expect(result.subjects[0].keyLx).toBeCloseTo(100, 6);
+    expect(result.allMet).toBe(true);
+    expect(result.worstStops).toBeCloseTo(0, 6);
+  });
+
+  it('square-law dimming: the same light needs level = 100·√0.25 = 50 %', () => {
+    const result = solveBalance({
+      subjects: [placement],
+      viewpoint: house,
+      units: [unitAt('front', vec3(0, -5, 1.7), 10000, 0, { dimmingCurve: 'square' })],
+      keyLx: 100,
+      keyOverFill: null,
+      backOverKeyStops: null,
+    });
+    expect(result.levels.front).toBeCloseTo(50, 9);
+  });
+
+  it('key, fill and back: each level by hand; 2:1 lighting ratio is key = fill (one stop lit to shaded side)', () => {
+    // At full: key 10 000·cos45°/25 = 282.84 lx, fill 8000·cos45°/25 = 226.27 lx on the face; back
+    // 10 000/25 = 400 lx on the back of the head. Targets: key 200, fill 200 (2:1), back 100 (−1 stop: 200/2).
+    const result = solveBalance({
+      subjects: [placement],
+      viewpoint: house,
+      units: [keyUnit(), fillUnit(), backUnit()],
+      keyLx: 200,
+      keyOverFill: keyOverFillFromLightingRatio(2),
+      backOverKeyStops: -1,
+    });
+    // Levels rounded to 0.1 %: 200/282.84 = 70.71 %, 200/226.27 = 88.39 %, 100/400 = 25 %.
+    expect(result.levels.key).toBeCloseTo(70.7, 9);
+    expect(result.levels.fill).toBeCloseTo(88.4, 9);
+    expect(result.levels.back).toBeCloseTo(25, 9);
+    const lit = result.subjects[0];
+    expect(lit.roles).toMatchObject({ key: 'key', fill: 'fill', back: 'back' });
+    expect(lit.keyLx).toBeCloseTo(0.707 * 282.843, 1);
+    expect(lit.lightingRatio).toBeCloseTo(2, 2);
+    expect(Math.log2(lit.lightingRatio ?? 0)).toBeCloseTo(1, 2);
+    expect(lit.backToKeyStops).toBeCloseTo(-1, 2);
+    expect(result.allMet).toBe(true);
+  });
+
+  it('a unit that may not change keeps its level and its light counts as given', () => {
+    // Fill fixed at 50 %: 8000·cos45°/25·0.5 = 113.14 lx. Key = fill wanted at 200 lx: the fill row
+    // misses (113 of 200 lx) and no fill unit may change.
+    const result = solveBalance({
+      subjects: [placement],
+      viewpoint: house,
+      units: [keyUnit(), { ...fillUnit(), mayChange: false }],
+      keyLx: 200,
+      keyOverFill: 1,
+      backOverKeyStops: null,
+    });
+    expect(Object.keys(result.levels)).toEqual(['key']);
+    const fill = result.subjects[0].targets.find((target) => target.role === 'fill');
+    expect(fill?.resultLx).toBeCloseTo(113.137, 2);
+    expect(fill?.met).toBe(false);
+    expect(fill?.reason).toEqual({ kind: 'noneMayChange' });
+  });
+
+  it('a role set by hand changes the sums: calling the fill unit "key" puts both in the key row', () => {
+    // Both key: 282.84·x + 226.27·y = 200 with the pull toward the levels now (50 %, 50 %): any split
+    // meets it; the sum is checked.
+    const result = solveBalance({
+      subjects: [{ placement: subject, roleOverrides: { fill: 'key' } }],
+      viewpoint: house,
+      units: [keyUnit(), fillUnit()],
+      keyLx: 200,
+      keyOverFill: null,
+      backOverKeyStops: null,
+    });
+    expect(result.subjects[0].roles.fill).toBe('key');
+    expect(result.subjects[0].fillLx).toBe(0);
+    expect(result.subjects[0].keyLx).toBeCloseTo(200, 0);
+  });
+
+  it('an unreachable key: never above 100 %, and the throw and beam that would reach it', () => {
+    // 10 000 cd at 5 m on axis gives 400 lx at full; 900 lx wanted.
+    const result = solveBalance({
+      subjects: [placement],
+      viewpoint: house,
+      units: [unitAt('front', vec3(0, -5, 1.7), 10000, 60)],
+      keyLx: 900,
+      keyOverFill: null,
+      backOverKeyStops: null,
+    });
+    expect(result.levels.front).toBe(100);
+    const key = result.subjects[0].targets[0];
+    expect(key.met).toBe(false);
+    expect(key.reason).toEqual({ kind: 'atFull' });
+    expect(key.offStops).toBeCloseTo(Math.log2(400 / 900), 6);
+    const advice = key.advice[0];
+    expect(advice.givesLx).toBeCloseTo(400, 6);
+    expect(advice.needsLx).toBeCloseTo(900, 6);
+    // Inverse square by hand: d·√(E/E_t) = 5·√(400/900) = 3.333 m.
+    expect(advice.throwNowM).toBeCloseTo(5, 9);
+    expect(advice.throwNeededM).toBeCloseTo(10 / 3, 6);
+    // Same lumens, 2.25 × the peak: small-angle solid angle ∝ angle², so about 20°/1.5 = 13.3°.
+    expect(advice.beam?.beamNeededDeg).toBeCloseTo(13.33, 0);
+    // Checked through the flux formula: the peak at the new angles is 2.25 × the peak now (±0.1 %).
+    const lumens = 1000;
+    const gain =
+      peakCandelaFromLumens(lumens, advice.beam?.beamNeededDeg ?? 0, advice.beam?.fieldNeededDeg ?? 0) /
+      peakCandelaFromLumens(lumens, 20, 30);
+    expect(gain).toBeCloseTo(2.25, 2);
+    expect((advice.beam?.fieldNeededDeg ?? 0) / (advice.beam?.beamNeededDeg ?? 1)).toBeCloseTo(1.5, 9);
+  });
+
+  it('a key out of reach keeps the ratio: fill follows the key the units can give (3:1 → fill = key/2)', () => {
+    // Key unit at full: 282.84 lx; 400 lx wanted. Fill then balances to 282.84/2 = 141.42 lx, which the
+    // fill unit (226.27 lx at full) gives at 141.42/226.27 = 62.5 % (by hand), not the 88.4 % that
+    // 400/2 = 200 lx would need.
+    const result = solveBalance({
+      subjects: [placement],
+      viewpoint: house,
+      units: [keyUnit(), fillUnit()],
+      keyLx: 400,
+      keyOverFill: keyOverFillFromLightingRatio(3),
+      backOverKeyStops: null,
+    });
+    expect(result.levels.key).toBe(100);
+    expect(result.levels.fill).toBeCloseTo(62.5, 9);
+    const lit = result.subjects[0];
+    expect(lit.keyOutOfReach).toBe(true);
+    expect(lit.lightingRatio).toBeCloseTo(3, 2);
+    const [key, fill] = lit.targets;
+    expect(key).toMatchObject({ role: 'key', targetLx: 400, met: false, reason: { kind: 'atFull' } });
+    expect(key.offStops).toBeCloseTo(Math.log2(282.843 / 400), 4);
+    expect(fill).toMatchObject({ role: 'fill', met: true });
+    expect(fill.targetLx).toBeCloseTo(141.421, 2);
+    // The advice takes the whole shortfall on the key unit: 5·√(282.84/400) = 4.204 m.
+    expect(key.advice[0].throwNeededM).toBeCloseTo(5 * Math.sqrt(282.8427 / 400), 4);
+  });
+
+  it('soft and measured sources get the throw advice only', () => {
+    const soft: BalanceUnit = {
+      ...unitAt('soft', vec3(0, -5, 1.7), 0, 100),
+      atFull: {
+        id: 'soft',
+        mount: vec3(0, -5, 1.7),
+        focus: face,
+        source: { kind: 'soft', shape: { kind: 'disc', radiusM: 0.2 }, luminanceCdPerM2: 10000 },
+      },
+      beamSpread: null,
+    };
+    const result = solveBalance({
+      subjects: [placement],
+      viewpoint: house,
+      units: [soft],
+      keyLx: 1000,
+      keyOverFill: null,
+      backOverKeyStops: null,
+    });
+    const advice = result.subjects[0].targets[0].advice[0];
+    expect(advice.beam).toBeNull();
+    // Inverse square on the light at full: d·√(E/E_t).
+    expect(advice.throwNeededM).toBeCloseTo(5 * Math.sqrt(advice.givesLx / 1000), 9);
+  });
+
+  it('narrowing for a gain of 1 keeps the beam; an impossible gain says so', () => {
+    expect(narrowingForGain({ kind: 'round', beamAngleDeg: 20, fieldAngleDeg: 30 }, 1)).toBe(1);
+    expect(narrowingForGain({ kind: 'round', beamAngleDeg: 20, fieldAngleDeg: 30 }, 1e9)).toBeNull();
+  });
+});
+
+describe('ratios as users give them', () => {
+  it('photographic lighting ratio 2:1 is key = fill, one stop between the lit and shaded sides (REFERENCE-CHECKS §6, common practice)', () => {
+    expect(keyOverFillFromLightingRatio(2)).toBe(1);
+    expect(Math.log2(2)).toBe(1);
+    // 3:1 means key = 2 × fill (1.585 stops).
+    expect(keyOverFillFromLightingRatio(3)).toBe(2);
+    expect(keyOverFillFromLightingRatio(1)).toBeNull();
+  });
+
+  it('key:fill in stops: 1 stop is key = 2 × fill', () => {
+    expect(keyOverFillFromStops(1)).toBe(2);
+    expect(keyOverFillFromStops(0)).toBe(1);
+  });
+
+  it('reads ratio text', () => {
+    expect(parseRatioText('2:1')).toBe(2);
+    expect(parseRatioText(' 3 : 2 ')).toBe(1.5);
+    expect(parseRatioText('4')).toBe(4);
+    expect(parseRatioText('2:0')).toBeNull();
+    expect(parseRatioText('two')).toBeNull();
+  });
+});
+
+describe('least squares with bounds on a larger problem', () => {
+  it('200 unknowns sharing one target finish quickly and meet it (one equation, many ways)', () => {
+    // Σ x_j = 50 with 0 ≤ x_j ≤ 1: any split meets it; the pull toward the start (all 0.1) spreads it
+    // evenly, so every x_j = 0.25 (by hand: 0.1 + (50 − 20)/200).
+    const n = 200;
+    const started = performance.now();
+    const { x, residualNorm } = boundedLeastSquares({
+      matrix: [Array.from({ length: n }, () => 1)],
+      rhs: [50],
+      lower: Array.from({ length: n }, () => 0),
+      upper: Array.from({ length: n }, () => 1),
+      start: Array.from({ length: n }, () => 0.1),
+    });
+    expect(performance.now() - started).toBeLessThan(2000);
+    expect(residualNorm).toBeLessThan(1e-6);
+    for (const value of x) expect(value).toBeCloseTo(0.25, 6);
+  });
+});
+
+/**
+ * Reference by exhaustion: every way of holding each unknown at its lower bound, its upper bound or
+ * free; the free ones solved from their normal equations by Cramer's rule (n ≤ 3); the best feasible
+ * point. Independent of the solver's method (no pull: the matrices here have full column rank).
+ */
+function exhaustiveBounded(matrix: number[][], rhs: number[], upper: number): number[] {
+  const n = matrix[0].length;
+  const objective = (x: number[]) =>
+    matrix.reduce((sum, row, i) => sum + (row.reduce((t, a, j) => t + a * x[j], 0) - rhs[i]) ** 2, 0);
+  const det = (m: number[][]): number =>
+    m.length === 1
+      ? m[0][0]
+      : m[0].reduce((sum, value, column) => {
+          const minor = m.slice(1).map((row) => row.filter((_, k) => k !== column));
+          return sum + (column % 2 === 0 ? 1 : -1) * value * det(minor);
+        }, 0);
+  let best: number[] | null = null;
+  for (let code = 0; code < 3 ** n; code += 1) {
+    const state = Array.from({ length: n }, (_, j) => Math.floor(code / 3 ** j) % 3); // 0 low, 1 high, 2 free
+    const x = state.map((kind) => (kind === 1 ? upper : 0));
+    const freeIds = state.flatMap((kind, j) => (kind === 2 ? [j] : []));
+    if (freeIds.length > 0) {
+      const gram = freeIds.map((j) =>
+        freeIds.map((k) => matrix.reduce((sum, row) => sum + row[j] * row[k], 0)),
+      );
+      const right = freeIds.map((j) =>
+        matrix.reduce((sum, row, i) => {
+          const held = row.reduce((t, a, k) => (state[k] === 2 ? t : t + a * x[k]), 0);
+          return sum + row[j] * (rhs[i] - held);
+        }, 0),
+      );
+      const d = det(gram);
+      if (Math.abs(d) < 1e-12) continue;
+      freeIds.forEach((j, index) => {
+        x[j] = det(gram.map((row, r) => row.map((value, c) => (c === index ? right[r] : value)))) / d;
+      });
+      if (freeIds.some((j) => x[j] < -1e-12 || x[j] > upper + 1e-12)) continue;
+    }
+    if (!best || objective(x) < objective(best) - 1e-15) best = x;
+  }
+  if (!best) throw new Error('no feasible point');
+  return best;
+}
+
+describe('least squares with bounds against an exhaustive search', () => {
+  it('agrees on 200 random problems of 1 to 3 unknowns and up to 4 equations', () => {
+    const random = seededRandom(20261202);
+    for (let trial = 0; trial < 200; trial += 1) {
+      const n = 1 + Math.floor(random() * 3);
+      const m = n + Math.floor(random() * 2);
+      const matrix = Array.from({ length: m }, () => Array.from({ length: n }, () => random() * 2 - 0.5));
+      const rhs = Array.from({ length: m }, () => random() * 3 - 1);
+      const expected = exhaustiveBounded(matrix, rhs, 1);
+      const { x } = boundedLeastSquares({
+        matrix,
+        rhs,
+        lower: Array(n).fill(0),
+        upper: Array(n).fill(1),
+        start: Array.from({ length: n }, () => random()),
+      });
+      x.forEach((value, j) => expect(value).toBeCloseTo(expected[j], 5));
+    }
+  });
+});
