@@ -28,6 +28,18 @@ function fixtureKey(fixture: RigFixture): string {
   return JSON.stringify(fixture);
 }
 
+interface Entry {
+  readonly fixture: RigFixture;
+  /** fixtureKey(fixture), worked out only when a changed object has to be compared. */
+  key: string | null;
+  readonly prepared: PreparedSource;
+}
+
+function keyOf(entry: Entry): string {
+  entry.key ??= fixtureKey(entry.fixture);
+  return entry.key;
+}
+
 /** A fresh engine for one grid and plane. */
 export function createCoverageEngine(spec: CoverageSpec): CoverageEngine {
   const normals: CellNormals = cellNormals(spec);
@@ -36,23 +48,31 @@ export function createCoverageEngine(spec: CoverageSpec): CoverageEngine {
     values: new Float64Array(cellCount(spec.grid)),
     overlaps: new Uint16Array(cellCount(spec.grid)),
   };
-  let current = new Map<string, { key: string; prepared: PreparedSource }>();
+  // A fixture whose object is the same as last time is unchanged (rig fixtures are never mutated);
+  // otherwise its key is compared with the last one's.
+  let current = new Map<string, Entry>();
   let recomputed = 0;
 
   return {
     spec,
     update(fixtures) {
-      const next = new Map<string, { key: string; prepared: PreparedSource }>();
+      const next = new Map<string, Entry>();
       const changes: { before?: PreparedSource; after?: PreparedSource }[] = [];
       for (const fixture of fixtures) {
-        const key = fixtureKey(fixture);
         const previous = current.get(fixture.id);
-        if (previous && previous.key === key) {
+        if (previous && previous.fixture === fixture) {
           next.set(fixture.id, previous);
           continue;
         }
+        if (previous) {
+          const key = fixtureKey(fixture);
+          if (keyOf(previous) === key) {
+            next.set(fixture.id, { fixture, key, prepared: previous.prepared });
+            continue;
+          }
+        }
         const prepared = prepareSource(fixture, spec);
-        next.set(fixture.id, { key, prepared });
+        next.set(fixture.id, { fixture, key: null, prepared });
         changes.push({ before: previous?.prepared, after: prepared });
       }
       for (const [id, previous] of current) {
@@ -76,12 +96,4 @@ export function createCoverageEngine(spec: CoverageSpec): CoverageEngine {
     },
     lastRecomputed: () => recomputed,
   };
-}
-
-/** The brute-force reference: every fixture on every cell, nothing skipped. For tests and benchmarks. */
-export function bruteForceCoverage(spec: CoverageSpec, fixtures: readonly RigFixture[]): CoverageGrid {
-  const normals = cellNormals(spec);
-  const grid: CoverageGrid = { spec, values: new Float64Array(cellCount(spec.grid)), overlaps: new Uint16Array(cellCount(spec.grid)) };
-  for (const fixture of fixtures) accumulateSource(prepareSource(fixture, spec), spec, normals, grid, 1, false);
-  return grid;
 }

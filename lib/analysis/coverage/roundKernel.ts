@@ -1,0 +1,201 @@
+/**
+ * The hot loop: one round beam's light on the cells of a grid. Per row, only the cells inside the
+ * beam's edge are visited (`rowInterval`; the model emits nothing beyond the edge, so skipping them
+ * changes nothing). Per cell: one square root, one division, the table polynomial (profileTable.ts)
+ * and one add, E = I0·f(θ)·cos i / d². Near the axis, where the table is not trusted, the closed form
+ * is evaluated from the angle itself. A horizontal plane lit from above has its own loop (cos i =
+ * −dz/d for every cell); vertical faces and fixtures at or below the plane take the general loop.
+ */
+import type { Vec3 } from '../../geometry/vector';
+import type { CoverageSpec } from './grid';
+import { type ProfileTable, exactTableProfile } from './profileTable';
+
+export interface RoundBeam {
+  readonly mount: Vec3;
+  /** Unit vector along the beam. */
+  readonly axis: Vec3;
+  readonly peakCd: number;
+  readonly table: ProfileTable;
+}
+
+export interface RoundTarget {
+  readonly values: Float64Array;
+  readonly overlaps: Uint16Array;
+}
+
+export interface RoundNormals {
+  readonly horizontal: boolean;
+  readonly x: Float64Array;
+  readonly y: Float64Array;
+}
+
+/** Whether x (along a row, relative to the fixture) is inside the cone: a·d > 0 and (a·d)² > cos²·|d|². */
+function insideCone(axisX: number, k: number, cosSquared: number, m2: number, x: number): boolean {
+  const along = axisX * x + k;
+  return along > 0 && along * along > cosSquared * (x * x + m2);
+}
+
+/**
+ * The x-interval (m, relative to the fixture) where a row line at (dy, dz) from the fixture lies
+ * inside the cone cos θ > cosEdge about `axis`, written to `out` as [low, high]; false if none. A cone
+ * of half-angle below 90° is convex, so a line meets it in one interval: the boundaries solve
+ * (a·d)² = cos²·|d|², and the pieces between them are tested for a·d > 0 and lying inside.
+ */
+export function rowInterval(axis: Vec3, cosEdge: number, dy: number, dz: number, out: Float64Array): boolean {
+  const k = axis.y * dy + axis.z * dz;
+  const m2 = dy * dy + dz * dz;
+  const c2 = cosEdge * cosEdge;
+  const qa = axis.x * axis.x - c2;
+  const qb = 2 * axis.x * k;
+  const qc = k * k - c2 * m2;
+  let first = Number.NaN;
+  let second = Number.NaN;
+  if (Math.abs(qa) < 1e-12) {
+    if (Math.abs(qb) > 1e-15) first = -qc / qb;
+  } else {
+    const discriminant = qb * qb - 4 * qa * qc;
+    if (discriminant >= 0) {
+      const root = Math.sqrt(discriminant);
+      const q = -0.5 * (qb + (qb >= 0 ? root : -root));
+      if (q !== 0) {
+        first = Math.min(q / qa, qc / q);
+        second = Math.max(q / qa, qc / q);
+      } else first = 0;
+    }
+  }
+  if (Number.isNaN(first)) {
+    // No boundary: the row is wholly inside or wholly outside.
+    if (!insideCone(axis.x, k, c2, m2, 0)) return false;
+    out[0] = -Infinity;
+    out[1] = Infinity;
+    return true;
+  }
+  const last = Number.isNaN(second) ? first : second;
+  const leftInside = insideCone(axis.x, k, c2, m2, first - 1 - Math.abs(first));
+  const middleInside = !Number.isNaN(second) && insideCone(axis.x, k, c2, m2, (first + second) / 2);
+  const rightInside = insideCone(axis.x, k, c2, m2, last + 1 + Math.abs(last));
+  if (!leftInside && !middleInside && !rightInside) return false;
+  out[0] = leftInside ? -Infinity : middleInside ? first : last;
+  out[1] = rightInside ? Infinity : middleInside ? last : first;
+  return true;
+}
+
+/** The closed form near the axis: θ = atan2(|a × d|, a · d), as the point-source functions take it. */
+function nearAxis(table: ProfileTable, axis: Vec3, dx: number, dy: number, dz: number, along: number): number {
+  const cx = axis.y * dz - axis.z * dy;
+  const cy = axis.z * dx - axis.x * dz;
+  const cz = axis.x * dy - axis.y * dx;
+  return exactTableProfile(table, Math.atan2(Math.sqrt(cx * cx + cy * cy + cz * cz), along));
+}
+
+// Scratch space shared by every call (the kernel is synchronous and never re-entered).
+const rowBounds = new Float64Array(2);
+let nearAxisScratch = new Int32Array(256);
+
+/** The table's degree-5 polynomial at `position` (≥ exactBelow), by Estrin's scheme (shorter chains). */
+// (Inlined by hand in the loops below; kept here as the statement of what they compute.)
+export function tablePolynomial(coefficients: Float64Array, position: number): number {
+  const slot = position | 0;
+  const u = 2 * (position - slot) - 1;
+  const base = slot * 6;
+  const u2 = u * u;
+  return coefficients[base] + u * coefficients[base + 1] + u2 * (coefficients[base + 2] + u * coefficients[base + 3] + u2 * (coefficients[base + 4] + u * coefficients[base + 5]));
+}
+
+/** Add (sign +1) or take away (sign −1) one round beam's light on the cells it reaches. */
+export function accumulateRound(beam: RoundBeam, spec: CoverageSpec, normals: RoundNormals, target: RoundTarget, sign: 1 | -1): void {
+  const { grid } = spec;
+  const { mount, axis, table } = beam;
+  const dz = spec.plane.heightM - mount.z;
+  const fromAbove = normals.horizontal && dz <= -1e-6;
+  if (normals.horizontal && !fromAbove && dz >= 0) return; // level with or below the plane: the light only grazes or misses it
+  const { cosEdge, cosBeam, positionScale, exactBelow, coefficients } = table;
+  const ax = axis.x;
+  const values = target.values;
+  const overlaps = target.overlaps;
+  const spacing = grid.spacingM;
+  const columns = grid.columns;
+  const x0 = grid.minX + 0.5 * spacing - mount.x;
+  const interval = rowBounds;
+  // Cells near the axis, where the closed form is used, are put aside and done after each row's loop.
+  if (nearAxisScratch.length < columns) nearAxisScratch = new Int32Array(columns);
+  const nearAxisColumns = nearAxisScratch;
+  const normalX = normals.x;
+  const normalY = normals.y;
+  // For a horizontal plane lit from above, cos i / d² = −dz / d³ on every cell.
+  const scaled = sign * beam.peakCd * (fromAbove ? -dz : 1);
+  for (let row = 0; row < grid.rows; row += 1) {
+    const dy = grid.minY + (row + 0.5) * spacing - mount.y;
+    // Visit only the cells of this row inside the beam's edge (one cell of margin for rounding).
+    if (!rowInterval(axis, cosEdge, dy, dz, interval)) continue;
+    const from = Math.floor((interval[0] - x0) / spacing) - 1;
+    const to = Math.ceil((interval[1] - x0) / spacing) + 1;
+    const firstColumn = from > 0 ? from : 0;
+    const lastColumn = to < columns - 1 ? to : columns - 1;
+    const rowStart = row * columns;
+    const dy2dz2 = dy * dy + dz * dz;
+    const alongRow = dy * axis.y + dz * axis.z;
+    let nearAxisCount = 0;
+    if (fromAbove) {
+      for (let column = firstColumn; column <= lastColumn; column += 1) {
+        const dx = x0 + column * spacing;
+        const inverseDistance = 1 / Math.sqrt(dx * dx + dy2dz2);
+        const cosOffAxis = (dx * ax + alongRow) * inverseDistance;
+        if (cosOffAxis <= cosEdge) continue;
+        const position = (1 - cosOffAxis) * positionScale;
+        if (position < exactBelow) {
+          nearAxisColumns[nearAxisCount] = column;
+          nearAxisCount += 1;
+          continue;
+        }
+        const slot = position | 0;
+        const u = 2 * (position - slot) - 1;
+        const base = slot * 6;
+        const u2 = u * u;
+        const relative =
+          coefficients[base] +
+          u * coefficients[base + 1] +
+          u2 * (coefficients[base + 2] + u * coefficients[base + 3] + u2 * (coefficients[base + 4] + u * coefficients[base + 5]));
+        const index = rowStart + column;
+        values[index] += scaled * relative * inverseDistance * inverseDistance * inverseDistance;
+        if (cosOffAxis >= cosBeam) overlaps[index] += sign;
+      }
+    } else {
+      for (let column = firstColumn; column <= lastColumn; column += 1) {
+        const dx = x0 + column * spacing;
+        const distanceSquared = dx * dx + dy2dz2;
+        if (distanceSquared < 1e-12) continue; // at the unit itself: no defined direction, no light
+        const inverseDistance = 1 / Math.sqrt(distanceSquared);
+        const cosOffAxis = (dx * ax + alongRow) * inverseDistance;
+        if (cosOffAxis <= cosEdge) continue;
+        const index = rowStart + column;
+        // Incidence: the direction from the cell back to the fixture is −(dx, dy, dz).
+        const cosIncidence = normals.horizontal ? -dz * inverseDistance : -(dx * normalX[index] + dy * normalY[index]) * inverseDistance;
+        if (cosIncidence <= 0) continue;
+        const position = (1 - cosOffAxis) * positionScale;
+        if (position < exactBelow) {
+          nearAxisColumns[nearAxisCount] = column;
+          nearAxisCount += 1;
+          continue;
+        }
+        values[index] += scaled * tablePolynomial(coefficients, position) * cosIncidence * inverseDistance * inverseDistance;
+        if (cosOffAxis >= cosBeam) overlaps[index] += sign;
+      }
+    }
+    for (let entry = 0; entry < nearAxisCount; entry += 1) {
+      const column = nearAxisColumns[entry];
+      const dx = x0 + column * spacing;
+      const inverseDistance = 1 / Math.sqrt(dx * dx + dy2dz2);
+      const along = dx * ax + alongRow;
+      const index = rowStart + column;
+      // cos i / d² is 1/d³ here when lit from above (−dz is in `scaled`), else worked out as in the loop.
+      const perDistanceSquared = fromAbove
+        ? inverseDistance
+        : normals.horizontal
+          ? -dz * inverseDistance
+          : -(dx * normalX[index] + dy * normalY[index]) * inverseDistance;
+      values[index] += scaled * nearAxis(table, axis, dx, dy, dz, along) * perDistanceSquared * inverseDistance * inverseDistance;
+      if (along * inverseDistance >= cosBeam) overlaps[index] += sign;
+    }
+  }
+}
