@@ -1,19 +1,21 @@
 /**
- * A round beam profile tabulated for the coverage kernel, accurate to about 1e-11 relative.
+ * A round beam profile tabulated for the coverage kernel, accurate to 1e-11 relative.
  *
  * The variable is s = (1 − cos θ) / (1 − cos θe) ∈ [0, 1] (θe the model's edge): the kernel has cos θ
  * at hand, so s needs no square root or arc cosine per cell, and a beam's cells are spread about
- * evenly over s (s grows with the solid angle). [0, 1] is cut into N equal intervals and on each the
- * profile f(s) = exp(−ln2·(θ(s)/hb)^p), θ(s) = 2·asin(sin(θe/2)·√s), is interpolated by a degree-5
- * polynomial through six Chebyshev points (max error ≈ h⁶/(2⁵·6!·2⁶)·|f⁽⁶⁾|).
+ * evenly over s (s grows with the solid angle). [0, 1] is cut into N equal intervals (256 … 4096) and
+ * on each the profile f(s) = exp(−ln2·(θ(s)/hb)^p), θ(s) = 2·asin(sin(θe/2)·√s), is interpolated by a
+ * degree-5 polynomial through six Chebyshev points (error ≈ 2·(h/4)⁶/6!·|f⁽⁶⁾|).
+ *
+ * Near the axis f behaves like 1 − c·s^(p/2), which polynomials follow poorly for small p, so the
+ * first sixteenth of s has a table of its own, 16 times finer; and where even that is not close
+ * enough (the first few of its intervals for p < 2) the closed form is evaluated from the angle itself
+ * (atan2 of |a × d| and a · d, as the point-source functions do).
  *
  * Every interval is checked against the closed form when the table is built (at both ends and the
  * middle, where a Chebyshev interpolant's error peaks), together with the rounding of s itself
- * (1 − cos θ loses digits near the axis). Near the axis f behaves like 1 − c·s^(p/2), which no
- * polynomial follows closely for small p, so the first intervals may fail: the table records where
- * the checked region begins (`exactBelow`) and the kernel evaluates the closed form there from the
- * angle itself (atan2 of |a × d| and a · d, as the point-source functions do). N is doubled (256 …
- * 4096) until that near-axis region is under 1/256 of s.
+ * (1 − cos θ loses digits near the axis, which matters for very narrow beams); only intervals that
+ * pass are used, so the tables never trade accuracy for speed: what fails is computed exactly.
  */
 import { profileEdgeAngleRad, profileExponent, profileShape } from '../../photometry/beam';
 
@@ -28,15 +30,21 @@ export interface ProfileTable {
   readonly positionScale: number;
   /** Number of intervals N. */
   readonly intervals: number;
-  /** Positions below this (in intervals) use the closed form: the table is not trusted there. */
-  readonly exactBelow: number;
+  /** Positions below this take the near-axis path (`nearAxisProfile`): the fine table or the closed form. */
+  readonly deferBelow: number;
   /**
    * Six monomial coefficients per interval (interval k at 6k … 6k + 5) in u = 2·(position − k) − 1,
    * u ∈ [−1, 1]: f ≈ c0 + u·(c1 + u·(c2 + u·(c3 + u·(c4 + u·c5)))); then one constant interval f(1) for
-   * a position that rounds up to N at the edge, so the kernel needs no bounds check.
+   * a position that rounds up to N at the edge, so the kernel needs no bounds check. Intervals below
+   * N/16 are not filled (the fine table covers them).
    */
   readonly coefficients: Float64Array;
-  /** The largest relative error found by the build's checks over the trusted intervals. */
+  /** The first sixteenth of s, FINE_INTERVALS intervals: position·fineRatio is the position in it. */
+  readonly fineCoefficients: Float64Array;
+  readonly fineRatio: number;
+  /** Fine positions below this use the closed form. */
+  readonly fineExactBelow: number;
+  /** The largest relative error found by the build's checks over the intervals in use. */
   readonly checkedError: number;
 }
 
@@ -46,8 +54,9 @@ const DEGREE = 5;
 const NODES = DEGREE + 1;
 const FIRST_INTERVALS = 256;
 const MOST_INTERVALS = 4096;
-/** The near-axis region the build tries to keep below (fraction of s). */
-const EXACT_SHARE = 1 / 256;
+/** The fine table covers s < 1/FINE_SPAN with this many intervals. */
+const FINE_SPAN = 16;
+const FINE_INTERVALS = 256;
 /** Relative rounding of 1 − cos θ computed from a cos θ near 1 (a few units in the last place). */
 const COSINE_ROUNDING = 4e-16;
 
@@ -84,11 +93,13 @@ function evaluate(coefficients: Float64Array, interval: number, u: number): numb
 
 interface Built {
   readonly coefficients: Float64Array;
+  /** Intervals below this are not trusted (or were not filled). */
   readonly exactBelow: number;
   readonly checkedError: number;
 }
 
-function build(intervals: number, beamHalfRad: number, fieldHalfRad: number, edge: number): Built {
+/** Fit `intervals` pieces over s ∈ [0, span], from interval `first` on, and check each. */
+function build(intervals: number, span: number, first: number, beamHalfRad: number, fieldHalfRad: number, edge: number): Built {
   const sinHalfEdge = Math.sin(edge / 2);
   const oneMinusCosEdge = 1 - Math.cos(edge);
   const exponent = profileExponent(beamHalfRad, fieldHalfRad);
@@ -106,32 +117,33 @@ function build(intervals: number, beamHalfRad: number, fieldHalfRad: number, edg
   };
   // One interval more than N: a constant f(1), for a position that rounds to N exactly at the edge.
   const coefficients = new Float64Array((intervals + 1) * NODES);
-  coefficients[intervals * NODES] = exactAt(1);
+  coefficients[intervals * NODES] = exactAt(span);
   const values = new Float64Array(NODES);
-  const errors = new Float64Array(intervals);
-  let left = exactAt(0);
-  for (let interval = 0; interval < intervals; interval += 1) {
-    for (let node = 0; node < NODES; node += 1) values[node] = exactAt((interval + (chebyshev[node] + 1) / 2) / intervals);
+  const errors = new Float64Array(intervals).fill(Infinity);
+  const step = span / intervals;
+  let left = exactAt(first * step);
+  for (let interval = first; interval < intervals; interval += 1) {
+    for (let node = 0; node < NODES; node += 1) values[node] = exactAt((interval + (chebyshev[node] + 1) / 2) * step);
     for (let power = 0; power < NODES; power += 1) {
       let sum = 0;
       for (let node = 0; node < NODES; node += 1) sum += inverseVandermonde[power][node] * values[node];
       coefficients[interval * NODES + power] = sum;
     }
-    const middle = exactAt((interval + 0.5) / intervals);
-    const right = exactAt((interval + 1) / intervals);
+    const middle = exactAt((interval + 0.5) * step);
+    const right = exactAt((interval + 1) * step);
     errors[interval] = Math.max(
       Math.abs(evaluate(coefficients, interval, -1) - left) / left,
       Math.abs(evaluate(coefficients, interval, 0) - middle) / middle,
       Math.abs(evaluate(coefficients, interval, 1) - right) / right,
-      roundingAt(interval / intervals, left),
-      roundingAt((interval + 1) / intervals, right),
+      roundingAt(interval * step, left),
+      roundingAt((interval + 1) * step, right),
     );
     left = right;
   }
   // The table is trusted from the first interval after which every interval passes.
   let exactBelow = intervals;
   let checkedError = 0;
-  while (exactBelow > 0 && errors[exactBelow - 1] <= TABLE_TOLERANCE) {
+  while (exactBelow > first && errors[exactBelow - 1] <= TABLE_TOLERANCE) {
     exactBelow -= 1;
     checkedError = Math.max(checkedError, errors[exactBelow]);
   }
@@ -146,12 +158,14 @@ export function profileTable(beamHalfRad: number, fieldHalfRad: number): Profile
   const cached = cache.get(key);
   if (cached) return cached;
   const edge = profileEdgeAngleRad(beamHalfRad, fieldHalfRad);
+  // The main table: doubled until every interval from N/16 on passes (or N reaches its most).
   let intervals = FIRST_INTERVALS;
-  let built = build(intervals, beamHalfRad, fieldHalfRad, edge);
-  while (built.exactBelow > intervals * EXACT_SHARE && intervals < MOST_INTERVALS) {
+  let main = build(intervals, 1, intervals / FINE_SPAN, beamHalfRad, fieldHalfRad, edge);
+  while (main.exactBelow > intervals / FINE_SPAN && intervals < MOST_INTERVALS) {
     intervals *= 2;
-    built = build(intervals, beamHalfRad, fieldHalfRad, edge);
+    main = build(intervals, 1, intervals / FINE_SPAN, beamHalfRad, fieldHalfRad, edge);
   }
+  const fine = build(FINE_INTERVALS, 1 / FINE_SPAN, 0, beamHalfRad, fieldHalfRad, edge);
   const table: ProfileTable = {
     beamHalfRad,
     fieldHalfRad,
@@ -159,9 +173,12 @@ export function profileTable(beamHalfRad: number, fieldHalfRad: number): Profile
     cosBeam: Math.cos(beamHalfRad),
     positionScale: intervals / (1 - Math.cos(edge)),
     intervals,
-    exactBelow: built.exactBelow,
-    coefficients: built.coefficients,
-    checkedError: built.checkedError,
+    deferBelow: main.exactBelow,
+    coefficients: main.coefficients,
+    fineCoefficients: fine.coefficients,
+    fineRatio: (FINE_INTERVALS * FINE_SPAN) / intervals,
+    fineExactBelow: fine.exactBelow,
+    checkedError: Math.max(main.checkedError, fine.checkedError),
   };
   if (cache.size >= 1024) cache.clear();
   cache.set(key, table);
@@ -174,13 +191,27 @@ export function exactTableProfile(table: ProfileTable, offAxisRad: number): numb
 }
 
 /**
+ * The profile at a table position below `deferBelow`: from the fine table where it is trusted, else
+ * NaN, meaning "evaluate the closed form from the angle".
+ */
+export function nearAxisProfile(table: ProfileTable, position: number): number {
+  const finePosition = position * table.fineRatio;
+  if (finePosition >= FINE_INTERVALS || finePosition < table.fineExactBelow) return Number.NaN;
+  const interval = finePosition | 0;
+  return evaluate(table.fineCoefficients, interval, 2 * (finePosition - interval) - 1);
+}
+
+/**
  * Relative intensity from a table for a direction with cosine `cosOffAxis` and angle `offAxisRad`
- * (the angle is used only in the near-axis region): 0 at or beyond the edge. The kernel inlines this.
+ * (the angle is used only where the closed form is): 0 at or beyond the edge. The kernel inlines this.
  */
 export function tableProfile(table: ProfileTable, cosOffAxis: number, offAxisRad: number): number {
   if (cosOffAxis <= table.cosEdge) return 0;
   const position = (1 - cosOffAxis) * table.positionScale;
-  if (position < table.exactBelow) return exactTableProfile(table, offAxisRad);
-  const interval = position | 0;
-  return evaluate(table.coefficients, interval, 2 * (position - interval) - 1);
+  if (position >= table.deferBelow) {
+    const interval = position | 0;
+    return evaluate(table.coefficients, interval, 2 * (position - interval) - 1);
+  }
+  const near = nearAxisProfile(table, position);
+  return Number.isNaN(near) ? exactTableProfile(table, offAxisRad) : near;
 }

@@ -8,7 +8,7 @@
  */
 import type { Vec3 } from '../../geometry/vector';
 import type { CoverageSpec } from './grid';
-import { type ProfileTable, exactTableProfile } from './profileTable';
+import { type ProfileTable, exactTableProfile, nearAxisProfile } from './profileTable';
 
 export interface RoundBeam {
   readonly mount: Vec3;
@@ -92,7 +92,7 @@ function nearAxis(table: ProfileTable, axis: Vec3, dx: number, dy: number, dz: n
 const rowBounds = new Float64Array(2);
 let nearAxisScratch = new Int32Array(256);
 
-/** The table's degree-5 polynomial at `position` (≥ exactBelow), by Estrin's scheme (shorter chains). */
+/** The table's degree-5 polynomial at `position` (≥ deferBelow), by Estrin's scheme (shorter chains). */
 // (Inlined by hand in the loops below; kept here as the statement of what they compute.)
 export function tablePolynomial(coefficients: Float64Array, position: number): number {
   const slot = position | 0;
@@ -109,7 +109,7 @@ export function accumulateRound(beam: RoundBeam, spec: CoverageSpec, normals: Ro
   const dz = spec.plane.heightM - mount.z;
   const fromAbove = normals.horizontal && dz <= -1e-6;
   if (normals.horizontal && !fromAbove && dz >= 0) return; // level with or below the plane: the light only grazes or misses it
-  const { cosEdge, cosBeam, positionScale, exactBelow, coefficients } = table;
+  const { cosEdge, cosBeam, positionScale, deferBelow, coefficients } = table;
   const ax = axis.x;
   const values = target.values;
   const overlaps = target.overlaps;
@@ -117,7 +117,7 @@ export function accumulateRound(beam: RoundBeam, spec: CoverageSpec, normals: Ro
   const columns = grid.columns;
   const x0 = grid.minX + 0.5 * spacing - mount.x;
   const interval = rowBounds;
-  // Cells near the axis, where the closed form is used, are put aside and done after each row's loop.
+  // Cells near the axis (fine table or closed form) are put aside and done after each row's loop.
   if (nearAxisScratch.length < columns) nearAxisScratch = new Int32Array(columns);
   const nearAxisColumns = nearAxisScratch;
   const normalX = normals.x;
@@ -143,7 +143,7 @@ export function accumulateRound(beam: RoundBeam, spec: CoverageSpec, normals: Ro
         const cosOffAxis = (dx * ax + alongRow) * inverseDistance;
         if (cosOffAxis <= cosEdge) continue;
         const position = (1 - cosOffAxis) * positionScale;
-        if (position < exactBelow) {
+        if (position < deferBelow) {
           nearAxisColumns[nearAxisCount] = column;
           nearAxisCount += 1;
           continue;
@@ -173,7 +173,7 @@ export function accumulateRound(beam: RoundBeam, spec: CoverageSpec, normals: Ro
         const cosIncidence = normals.horizontal ? -dz * inverseDistance : -(dx * normalX[index] + dy * normalY[index]) * inverseDistance;
         if (cosIncidence <= 0) continue;
         const position = (1 - cosOffAxis) * positionScale;
-        if (position < exactBelow) {
+        if (position < deferBelow) {
           nearAxisColumns[nearAxisCount] = column;
           nearAxisCount += 1;
           continue;
@@ -187,6 +187,9 @@ export function accumulateRound(beam: RoundBeam, spec: CoverageSpec, normals: Ro
       const dx = x0 + column * spacing;
       const inverseDistance = 1 / Math.sqrt(dx * dx + dy2dz2);
       const along = dx * ax + alongRow;
+      const cosOffAxis = along * inverseDistance;
+      const fine = nearAxisProfile(table, (1 - cosOffAxis) * positionScale);
+      const relative = Number.isNaN(fine) ? nearAxis(table, axis, dx, dy, dz, along) : fine;
       const index = rowStart + column;
       // cos i / d² is 1/d³ here when lit from above (−dz is in `scaled`), else worked out as in the loop.
       const perDistanceSquared = fromAbove
@@ -194,8 +197,8 @@ export function accumulateRound(beam: RoundBeam, spec: CoverageSpec, normals: Ro
         : normals.horizontal
           ? -dz * inverseDistance
           : -(dx * normalX[index] + dy * normalY[index]) * inverseDistance;
-      values[index] += scaled * nearAxis(table, axis, dx, dy, dz, along) * perDistanceSquared * inverseDistance * inverseDistance;
-      if (along * inverseDistance >= cosBeam) overlaps[index] += sign;
+      values[index] += scaled * relative * perDistanceSquared * inverseDistance * inverseDistance;
+      if (cosOffAxis >= cosBeam) overlaps[index] += sign;
     }
   }
 }

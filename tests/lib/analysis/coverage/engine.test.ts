@@ -31,20 +31,20 @@ describe('the coverage engine', () => {
     expect(grid.values[cellIndex(60, 40)]).toBeCloseTo(16000 / 16, 9); // 1000 lx
   });
 
-  it('matches the exact point-source function within 2e-6 (the tabulated profile)', () => {
+  it('matches the exact point-source function within 1e-10 on every cell (the tabulated profile)', () => {
     const fixture = unit('a', vec3(-1, -2, 6), vec3(0.5, 3, 1.6), 42000, 19, 33);
     const grid = createCoverageEngine(spec).update([fixture]);
     let worst = 0;
-    for (let row = 0; row < spec.grid.rows; row += 7) {
-      for (let column = 0; column < spec.grid.columns; column += 7) {
+    for (let row = 0; row < spec.grid.rows; row += 1) {
+      for (let column = 0; column < spec.grid.columns; column += 1) {
         const point = vec3(cellCentreX(spec.grid, column), cellCentreY(spec.grid, row), 1.6);
         const exact = beamIlluminanceLx({ mount: fixture.mount, axis: vec3(1.5, 5, -4.4), peakCd: 42000, spread: { kind: 'round', beamAngleDeg: 19, fieldAngleDeg: 33 }, point, normal: vec3(0, 0, 1) });
         const engine = grid.values[cellIndex(column, row)];
-        if (exact > 1) worst = Math.max(worst, Math.abs(engine - exact) / exact);
-        else expect(Math.abs(engine - exact)).toBeLessThan(1e-3);
+        if (exact > 0) worst = Math.max(worst, Math.abs(engine - exact) / exact);
+        else expect(engine).toBe(0);
       }
     }
-    expect(worst).toBeLessThan(2e-6);
+    expect(worst).toBeLessThan(1e-10);
   });
 
   it('two mirror-image units give a mirror-image map', () => {
@@ -116,12 +116,13 @@ describe('culled and incremental results equal the brute-force reference', () =>
         expectSame(engine.update(rig).values, bruteForceCoverage(coarse, rig).values);
         const changed = [...rig.slice(1), toUnit(moved, 0)];
         const grid = engine.update(changed);
-        expectSame(grid.values, bruteForceCoverage(coarse, changed).values);
-        expect(grid.overlaps).toEqual(bruteForceCoverage(coarse, changed).overlaps);
+        const reference = bruteForceCoverage(coarse, changed);
+        expectSame(grid.values, reference.values);
+        expect(grid.overlaps).toEqual(reference.overlaps);
       }),
       { numRuns: 40 },
     );
-  });
+  }, 120_000); // the reference evaluates every unit on every cell through the general point-source functions
 
   it('an incremental update recomputes only the unit that changed', () => {
     const rig = [unit('a', vec3(-2, -2, 6), vec3(-1, 2, 1.6)), unit('b', vec3(2, -2, 6), vec3(1, 2, 1.6)), unit('c', vec3(0, 8, 6), vec3(0, 4, 1.6))];
