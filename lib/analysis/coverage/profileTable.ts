@@ -7,10 +7,11 @@
  * on each the profile f(s) = exp(−ln2·(θ(s)/hb)^p), θ(s) = 2·asin(sin(θe/2)·√s), is interpolated by a
  * degree-5 polynomial through six Chebyshev points (error ≈ 2·(h/4)⁶/6!·|f⁽⁶⁾|).
  *
- * Near the axis f behaves like 1 − c·s^(p/2), which polynomials follow poorly for small p, so the
- * first sixteenth of s has a table of its own, 16 times finer; and where even that is not close
- * enough (the first few of its intervals for p < 2) the closed form is evaluated from the angle itself
- * (atan2 of |a × d| and a · d, as the point-source functions do).
+ * Near the axis f behaves like 1 − c·s^(p/2), which polynomials follow poorly for small p: the main
+ * table is used from its first interval that passes the check, and below that (never above s = 1/16)
+ * a table 16 times finer over the first sixteenth of s; where even that fails (its first few intervals
+ * for p < 2) the closed form is evaluated from the angle itself (atan2 of |a × d| and a · d, as the
+ * point-source functions do).
  *
  * Every interval is checked against the closed form when the table is built (at both ends and the
  * middle, where a Chebyshev interpolant's error peaks), together with the rounding of s itself
@@ -35,8 +36,7 @@ export interface ProfileTable {
   /**
    * Six monomial coefficients per interval (interval k at 6k … 6k + 5) in u = 2·(position − k) − 1,
    * u ∈ [−1, 1]: f ≈ c0 + u·(c1 + u·(c2 + u·(c3 + u·(c4 + u·c5)))); then one constant interval f(1) for
-   * a position that rounds up to N at the edge, so the kernel needs no bounds check. Intervals below
-   * N/16 are not filled (the fine table covers them).
+   * a position that rounds up to N at the edge, so the kernel needs no bounds check.
    */
   readonly coefficients: Float64Array;
   /** The first sixteenth of s, FINE_INTERVALS intervals: position·fineRatio is the position in it. */
@@ -158,12 +158,13 @@ export function profileTable(beamHalfRad: number, fieldHalfRad: number): Profile
   const cached = cache.get(key);
   if (cached) return cached;
   const edge = profileEdgeAngleRad(beamHalfRad, fieldHalfRad);
-  // The main table: doubled until every interval from N/16 on passes (or N reaches its most).
+  // The main table: doubled until every interval from N/16 on passes (or N reaches its most); it is
+  // used from its first passing interval, and the fine table or the closed form below that.
   let intervals = FIRST_INTERVALS;
-  let main = build(intervals, 1, intervals / FINE_SPAN, beamHalfRad, fieldHalfRad, edge);
+  let main = build(intervals, 1, 0, beamHalfRad, fieldHalfRad, edge);
   while (main.exactBelow > intervals / FINE_SPAN && intervals < MOST_INTERVALS) {
     intervals *= 2;
-    main = build(intervals, 1, intervals / FINE_SPAN, beamHalfRad, fieldHalfRad, edge);
+    main = build(intervals, 1, 0, beamHalfRad, fieldHalfRad, edge);
   }
   const fine = build(FINE_INTERVALS, 1 / FINE_SPAN, 0, beamHalfRad, fieldHalfRad, edge);
   const table: ProfileTable = {

@@ -80,6 +80,30 @@ export function rowInterval(axis: Vec3, cosEdge: number, dy: number, dz: number,
   return true;
 }
 
+/**
+ * Rows (inclusive) that can meet the cone cos θ > cosEdge on the plane dz below/above the fixture: a row
+ * at dy meets the double cone when (a_y·dy + a_z·dz)² ≥ (c² − a_x²)·(dy² + dz²), a quadratic in dy;
+ * when it opens downward the rows lie between its roots (with one row of margin), otherwise any row
+ * may. A superset: rowInterval decides each row exactly.
+ */
+function rowRange(axis: Vec3, cosEdge: number, dz: number, mountY: number, spec: CoverageSpec): { first: number; last: number } {
+  const { grid } = spec;
+  const g = cosEdge * cosEdge - axis.x * axis.x;
+  const a = axis.y * axis.y - g;
+  if (!(a < -1e-9)) return { first: 0, last: grid.rows - 1 };
+  const b = 2 * axis.y * axis.z * dz;
+  const c = (axis.z * axis.z - g) * dz * dz;
+  const discriminant = b * b - 4 * a * c;
+  if (discriminant < 0) return { first: 0, last: -1 };
+  const root = Math.sqrt(discriminant);
+  const one = (-b + root) / (2 * a);
+  const other = (-b - root) / (2 * a);
+  // Row r has dy = minY + (r + ½)·spacing − mountY.
+  const first = Math.floor((mountY + Math.min(one, other) - grid.minY) / grid.spacingM - 0.5) - 1;
+  const last = Math.ceil((mountY + Math.max(one, other) - grid.minY) / grid.spacingM - 0.5) + 1;
+  return { first: Math.max(0, first), last: Math.min(grid.rows - 1, last) };
+}
+
 /** The closed form near the axis: θ = atan2(|a × d|, a · d), as the point-source functions take it. */
 function nearAxis(table: ProfileTable, axis: Vec3, dx: number, dy: number, dz: number, along: number): number {
   const cx = axis.y * dz - axis.z * dy;
@@ -90,6 +114,7 @@ function nearAxis(table: ProfileTable, axis: Vec3, dx: number, dy: number, dz: n
 
 // Scratch space shared by every call (the kernel is synchronous and never re-entered).
 const rowBounds = new Float64Array(2);
+const beamBounds = new Float64Array(2);
 let nearAxisScratch = new Int32Array(256);
 
 /** The table's degree-5 polynomial at `position` (≥ deferBelow), by Estrin's scheme (shorter chains). */
@@ -124,7 +149,8 @@ export function accumulateRound(beam: RoundBeam, spec: CoverageSpec, normals: Ro
   const normalY = normals.y;
   // For a horizontal plane lit from above, cos i / d² = −dz / d³ on every cell.
   const scaled = sign * beam.peakCd * (fromAbove ? -dz : 1);
-  for (let row = 0; row < grid.rows; row += 1) {
+  const rows = rowRange(axis, cosEdge, dz, mount.y, spec);
+  for (let row = rows.first; row <= rows.last; row += 1) {
     const dy = grid.minY + (row + 0.5) * spacing - mount.y;
     // Visit only the cells of this row inside the beam's edge (one cell of margin for rounding).
     if (!rowInterval(axis, cosEdge, dy, dz, interval)) continue;
@@ -158,7 +184,27 @@ export function accumulateRound(beam: RoundBeam, spec: CoverageSpec, normals: Ro
           u2 * (coefficients[base + 2] + u * coefficients[base + 3] + u2 * (coefficients[base + 4] + u * coefficients[base + 5]));
         const index = rowStart + column;
         values[index] += scaled * relative * inverseDistance * inverseDistance * inverseDistance;
-        if (cosOffAxis >= cosBeam) overlaps[index] += sign;
+      }
+      // Every cell here is lit, so the beam-angle count is the cells with cos θ ≥ cos hb: those a cell or
+      // more inside the row's beam-angle interval at once, the few near its ends one by one.
+      if (rowInterval(axis, cosBeam, dy, dz, beamBounds)) {
+        const low = (beamBounds[0] - x0) / spacing;
+        const high = (beamBounds[1] - x0) / spacing;
+        const outerFrom = Math.max(0, Math.floor(low) - 1);
+        const outerTo = Math.min(columns - 1, Math.ceil(high) + 1);
+        const innerFrom = Math.max(outerFrom, Math.ceil(low) + 1);
+        const innerTo = Math.min(outerTo, Math.floor(high) - 1);
+        const checkUntil = innerFrom <= innerTo ? innerFrom : outerTo + 1;
+        let column = outerFrom;
+        for (; column < checkUntil; column += 1) {
+          const dx = x0 + column * spacing;
+          if ((dx * ax + alongRow) * (1 / Math.sqrt(dx * dx + dy2dz2)) >= cosBeam) overlaps[rowStart + column] += sign;
+        }
+        for (; column <= innerTo; column += 1) overlaps[rowStart + column] += sign;
+        for (; column <= outerTo; column += 1) {
+          const dx = x0 + column * spacing;
+          if ((dx * ax + alongRow) * (1 / Math.sqrt(dx * dx + dy2dz2)) >= cosBeam) overlaps[rowStart + column] += sign;
+        }
       }
     } else {
       for (let column = firstColumn; column <= lastColumn; column += 1) {
@@ -198,7 +244,7 @@ export function accumulateRound(beam: RoundBeam, spec: CoverageSpec, normals: Ro
           ? -dz * inverseDistance
           : -(dx * normalX[index] + dy * normalY[index]) * inverseDistance;
       values[index] += scaled * relative * perDistanceSquared * inverseDistance * inverseDistance;
-      if (cosOffAxis >= cosBeam) overlaps[index] += sign;
+      if (!fromAbove && cosOffAxis >= cosBeam) overlaps[index] += sign;
     }
   }
 }

@@ -87,7 +87,7 @@ describe('the coverage engine', () => {
 });
 
 describe('culled and incremental results equal the brute-force reference', () => {
-  const arbitraryUnit = fc.record({
+  const unitFields = {
     mx: fc.double({ min: -8, max: 8, noNaN: true }),
     my: fc.double({ min: -4, max: 9, noNaN: true }),
     mz: fc.double({ min: 2.5, max: 9, noNaN: true }),
@@ -96,7 +96,8 @@ describe('culled and incremental results equal the brute-force reference', () =>
     beam: fc.double({ min: 5, max: 60, noNaN: true }),
     ratio: fc.double({ min: 1.2, max: 2.2, noNaN: true }),
     peak: fc.double({ min: 1000, max: 200000, noNaN: true }),
-  });
+  };
+  const arbitraryUnit = fc.record(unitFields);
   const toUnit = (value: { mx: number; my: number; mz: number; fx: number; fy: number; beam: number; ratio: number; peak: number }, index: number) =>
     unit(`u${index}`, vec3(value.mx, value.my, value.mz), vec3(value.fx, value.fy, 1.6), value.peak, value.beam, Math.min(value.beam * value.ratio, 170));
   const coarse: CoverageSpec = { grid: gridOver({ minX: -6, maxX: 6, minY: -1, maxY: 7 }, 0.25), plane: { kind: 'horizontal', heightM: 1.6 } };
@@ -123,6 +124,23 @@ describe('culled and incremental results equal the brute-force reference', () =>
       { numRuns: 40 },
     );
   }, 120_000); // the reference evaluates every unit on every cell through the general point-source functions
+
+  it('on vertical faces turned toward a viewpoint, and with units level with or below the plane', () => {
+    const low = fc.record({ ...unitFields, mz: fc.double({ min: 0.5, max: 9, noNaN: true }) });
+    fc.assert(
+      fc.property(fc.array(low, { minLength: 1, maxLength: 8 }), fc.double({ min: -4, max: 4, noNaN: true }), (values, viewX) => {
+        const rig = values.map(toUnit);
+        const faces: CoverageSpec = { grid: coarse.grid, plane: { kind: 'toward', heightM: 1.6, viewpoint: vec3(viewX, -9, 1.6) } };
+        for (const plane of [faces, coarse]) {
+          const reference = bruteForceCoverage(plane, rig);
+          const grid = createCoverageEngine(plane).update(rig);
+          expectSame(grid.values, reference.values);
+          expect(grid.overlaps).toEqual(reference.overlaps);
+        }
+      }),
+      { numRuns: 20 },
+    );
+  }, 120_000);
 
   it('an incremental update recomputes only the unit that changed', () => {
     const rig = [unit('a', vec3(-2, -2, 6), vec3(-1, 2, 1.6)), unit('b', vec3(2, -2, 6), vec3(1, 2, 1.6)), unit('c', vec3(0, 8, 6), vec3(0, 4, 1.6))];
