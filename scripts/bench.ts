@@ -163,14 +163,29 @@ const spec: CoverageSpec = {
 const cells = spec.grid.columns * spec.grid.rows;
 for (const count of [50, 300, 1000]) {
   const fixtures = rig(count, count);
-  // The first computation of a rig also builds the profile tables of its beam types (18 here).
+  // The first computation (on the 50-unit line this also builds the profile tables of the 18 beam types
+  // and warms up the JIT; the larger rigs reuse them).
   const coldStart = performance.now();
   const engine = createCoverageEngine(spec);
   const culled = Float64Array.from(engine.update(fixtures).values);
   const culledOverlaps = Uint16Array.from(engine.update(fixtures).overlaps);
   const coldMs = round3(performance.now() - coldStart);
-  // Full recompute: a new engine (new arrays) computing every unit.
-  const full = measure(count >= 1000 ? 9 : 21, () => createCoverageEngine(spec).update(fixtures));
+  // Full recompute: every unit changed (all levels nudged, as a master fader would), on the engine
+  // that is kept between updates as the app's service keeps it.
+  const nudged = fixtures.map((fixture) =>
+    fixture.source.kind === 'beam'
+      ? { ...fixture, source: { ...fixture.source, peakCd: fixture.source.peakCd * 1.000001 } }
+      : fixture,
+  );
+  let flip = false;
+  const full = measure(count >= 1000 ? 11 : 31, () => {
+    flip = !flip;
+    engine.update(flip ? nudged : fixtures);
+    if (engine.lastRecomputed() !== count) throw new Error('the full recompute did not recompute every unit');
+  });
+  engine.update(fixtures);
+  // A new engine (its arrays allocated) computing every unit, for comparison.
+  const fresh = measure(count >= 1000 ? 7 : 15, () => createCoverageEngine(spec).update(fixtures));
   let step = 0;
   const incremental = measure(41, () => {
     step += 1;
@@ -181,6 +196,7 @@ for (const count of [50, 300, 1000]) {
     );
     engine.update(moved);
   });
+  const afterIncremental = Float64Array.from(engine.update(fixtures).values);
   // The reference takes seconds per run (about 2 µs per unit × cell), so few runs and no warm-up.
   let brute = bruteForceCoverage(spec, []);
   const bruteForce = measure(count <= 50 ? 3 : 1, () => (brute = bruteForceCoverage(spec, fixtures)), 0);
@@ -194,9 +210,11 @@ for (const count of [50, 300, 1000]) {
     name: 'coverage',
     fixtures: count,
     cells,
-    firstComputationMs: coldMs,
+    firstUpdateMs: coldMs,
     fullRecomputeMedianMs: full.wallMs,
     fullRecomputeCpuMedianMs: full.cpuMs,
+    newEngineMedianMs: fresh.wallMs,
+    newEngineCpuMedianMs: fresh.cpuMs,
     incrementalMedianMs: incremental.wallMs,
     incrementalCpuMedianMs: incremental.cpuMs,
     bruteForceMedianMs: bruteForce.wallMs,
@@ -205,6 +223,7 @@ for (const count of [50, 300, 1000]) {
     leanBruteForceMedianMs: leanBrute.wallMs,
     speedupOverLeanBruteForce: Number((leanBrute.wallMs / full.wallMs).toFixed(1)),
     maxRelativeDifference: difference.max,
+    maxRelativeDifferenceAfterIncremental: maxRelativeDifference(afterIncremental, brute.values).max,
     maxRelativeDifferenceLean: maxRelativeDifference(lean, brute.values).max,
     cellsCompared: difference.cellsCompared,
     overlapsEqual,
