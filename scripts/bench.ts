@@ -196,6 +196,16 @@ for (const count of [50, 300, 1000]) {
     );
     engine.update(moved);
   });
+  // The same, with every unit a new object of equal values, as the Web Worker receives the rig.
+  const incrementalCloned = measure(41, () => {
+    step += 1;
+    const moved = structuredClone(fixtures).map((fixture, index) =>
+      index === 0
+        ? { ...fixture, focus: vec3(fixture.focus.x + 0.01 * (step % 7), fixture.focus.y, 1.6) }
+        : fixture,
+    );
+    engine.update(moved);
+  });
   const afterIncremental = Float64Array.from(engine.update(fixtures).values);
   // The reference takes seconds per run (about 2 µs per unit × cell), so few runs and no warm-up.
   let brute = bruteForceCoverage(spec, []);
@@ -217,6 +227,7 @@ for (const count of [50, 300, 1000]) {
     newEngineCpuMedianMs: fresh.cpuMs,
     incrementalMedianMs: incremental.wallMs,
     incrementalCpuMedianMs: incremental.cpuMs,
+    incrementalClonedRigMedianMs: incrementalCloned.wallMs,
     bruteForceMedianMs: bruteForce.wallMs,
     bruteForceRuns: count <= 50 ? 3 : 1,
     speedupOverBruteForce: Number((bruteForce.wallMs / full.wallMs).toFixed(1)),

@@ -152,6 +152,17 @@ describe('culled and incremental results equal the brute-force reference', () =>
     expect(engine.lastRecomputed()).toBe(1);
   });
 
+  it('a copy of the rig with equal values recomputes nothing; a changed field deep inside recomputes that unit', () => {
+    const rig = [unit('a', vec3(-2, -2, 6), vec3(-1, 2, 1.6)), unit('b', vec3(2, -2, 6), vec3(1, 2, 1.6), 30000, 19, 30)];
+    const engine = createCoverageEngine(coarse);
+    const before = Float64Array.from(engine.update(rig).values);
+    // As the worker receives them: new objects, the same values.
+    expect(engine.update(structuredClone(rig)).values).toEqual(before);
+    expect(engine.lastRecomputed()).toBe(0);
+    engine.update([rig[0], unit('b', vec3(2, -2, 6), vec3(1, 2, 1.6), 30000, 19, 31)]);
+    expect(engine.lastRecomputed()).toBe(1);
+  });
+
   it('taking every unit away leaves a dark grid', () => {
     const engine = createCoverageEngine(coarse);
     engine.update([unit('a', vec3(-2, -2, 6), vec3(-1, 2, 1.6))]);
