@@ -53,7 +53,9 @@ export function rowInterval(axis: Vec3, cosEdge: number, dy: number, dz: number,
   if (Math.abs(qa) < 1e-12) {
     if (Math.abs(qb) > 1e-15) first = -qc / qb;
   } else {
-    const discriminant = qb * qb - 4 * qa * qc;
+    // qb² − 4·qa·qc = 4c²·(k² + qa·m²), written so: the expanded form cancels to rounding noise when
+    // the edge is near 90° (c → 0, a double root), and a row half inside the beam was lost.
+    const discriminant = 4 * c2 * (k * k + qa * m2);
     if (discriminant >= 0) {
       const root = Math.sqrt(discriminant);
       const q = -0.5 * (qb + (qb >= 0 ? root : -root));
@@ -92,9 +94,9 @@ function rowRange(axis: Vec3, cosEdge: number, dz: number, mountY: number, spec:
   const a = axis.y * axis.y - g;
   if (!(a < -1e-9)) return { first: 0, last: grid.rows - 1 };
   const b = 2 * axis.y * axis.z * dz;
-  const c = (axis.z * axis.z - g) * dz * dz;
-  const discriminant = b * b - 4 * a * c;
-  if (discriminant < 0) return { first: 0, last: -1 };
+  // b² − 4ac = 4·dz²·g·(1 − c²) for a unit axis, written so to keep clear of cancellation.
+  const discriminant = 4 * dz * dz * g * (1 - cosEdge * cosEdge);
+  if (!(discriminant >= 0)) return { first: 0, last: grid.rows - 1 };
   const root = Math.sqrt(discriminant);
   const one = (-b + root) / (2 * a);
   const other = (-b - root) / (2 * a);

@@ -142,6 +142,22 @@ describe('culled and incremental results equal the brute-force reference', () =>
     );
   }, 120_000);
 
+  it('a wide unit aimed almost level (its edge at 90°) lights every row it reaches (regression)', () => {
+    // Found by a random rig: the row test lost rows half inside a beam whose edge is at 90°.
+    const wide = unit(
+      'w',
+      vec3(6.818577811121941, 0.4941718252375722, 2.528070420608856),
+      vec3(-5.569997836835682, 2.7030201219022274, 1.6),
+      173315.7587966416,
+      53.41776154353283,
+      115.08506591119249,
+    );
+    const reference = bruteForceCoverage(coarse, [wide]);
+    expectSame(createCoverageEngine(coarse).update([wide]).values, reference.values);
+    // The cell at (−5.875, −0.375) is about 14° off the axis: well lit.
+    expect(reference.values[2 * coarse.grid.columns]).toBeGreaterThan(10);
+  });
+
   it('an incremental update recomputes only the unit that changed', () => {
     const rig = [unit('a', vec3(-2, -2, 6), vec3(-1, 2, 1.6)), unit('b', vec3(2, -2, 6), vec3(1, 2, 1.6)), unit('c', vec3(0, 8, 6), vec3(0, 4, 1.6))];
     const engine = createCoverageEngine(coarse);
