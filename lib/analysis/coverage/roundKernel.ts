@@ -1,10 +1,11 @@
 /**
- * The hot loop: one round beam's light on the cells of a grid. Per row, only the cells inside the
- * beam's edge are visited (`rowInterval`; the model emits nothing beyond the edge, so skipping them
- * changes nothing). Per cell: one square root, one division, the table polynomial (profileTable.ts)
- * and one add, E = I0·f(θ)·cos i / d². Near the axis, where the table is not trusted, the closed form
- * is evaluated from the angle itself. A horizontal plane lit from above has its own loop (cos i =
- * −dz/d for every cell); vertical faces and fixtures at or below the plane take the general loop.
+ * The hot loop: one round beam's light on the cells of a grid. Only the rows that can meet the beam
+ * (`rowRange`) and in each only the cells inside its edge (`rowInterval`) are visited; the model emits
+ * nothing beyond the edge, so skipping them changes nothing. Per cell: one square root, one division,
+ * the table polynomial (profileTable.ts) and one add, E = I0·f(θ)·cos i / d². Cells near the axis are
+ * put aside and done after the row with the fine table or the closed form from the angle itself. A
+ * horizontal plane lit from above has its own loop (cos i = −dz/d on every cell, the beam-angle count
+ * by row interval); vertical faces and fixtures at or below the plane take the general loop.
  */
 import type { Vec3 } from '../../geometry/vector';
 import type { CoverageSpec } from './grid';
@@ -119,8 +120,10 @@ const rowBounds = new Float64Array(2);
 const beamBounds = new Float64Array(2);
 let nearAxisScratch = new Int32Array(256);
 
-/** The table's degree-5 polynomial at `position` (≥ deferBelow), by Estrin's scheme (shorter chains). */
-// (Inlined by hand in the loops below; kept here as the statement of what they compute.)
+/**
+ * The table's degree-5 polynomial at `position` (≥ deferBelow), by Estrin's scheme (shorter chains of
+ * dependent operations than Horner's). The loop for a plane lit from above has it inlined by hand.
+ */
 export function tablePolynomial(coefficients: Float64Array, position: number): number {
   const slot = position | 0;
   const u = 2 * (position - slot) - 1;
