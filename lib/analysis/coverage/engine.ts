@@ -23,9 +23,32 @@ export interface CoverageEngine {
   lastRecomputed(): number;
 }
 
-/** A key that changes whenever anything about a fixture that affects its light changes. */
-function fixtureKey(fixture: RigFixture): string {
-  return JSON.stringify(fixture);
+/**
+ * Whether two pieces of plain data (numbers, strings, booleans, null, arrays, objects) are equal in
+ * every field: how the engine tells that a fixture's light has not changed. It stops at the first
+ * difference, and a measured grid that is the same object is not walked.
+ */
+function samePlainData(a: unknown, b: unknown): boolean {
+  if (a === b) return true;
+  if (typeof a === 'number' && typeof b === 'number') return Number.isNaN(a) && Number.isNaN(b);
+  if (typeof a !== 'object' || typeof b !== 'object' || a === null || b === null) return false;
+  if (Array.isArray(a) !== Array.isArray(b)) return false;
+  if (Array.isArray(a) && Array.isArray(b)) {
+    if (a.length !== b.length) return false;
+    for (let index = 0; index < a.length; index += 1) if (!samePlainData(a[index], b[index])) return false;
+    return true;
+  }
+  const left = a as Record<string, unknown>;
+  const right = b as Record<string, unknown>;
+  const keys = Object.keys(left);
+  if (keys.length !== Object.keys(right).length) return false;
+  for (const key of keys) if (!(key in right) || !samePlainData(left[key], right[key])) return false;
+  return true;
+}
+
+interface Entry {
+  readonly fixture: RigFixture;
+  readonly prepared: PreparedSource;
 }
 
 /** A fresh engine for one grid and plane. */
@@ -36,23 +59,24 @@ export function createCoverageEngine(spec: CoverageSpec): CoverageEngine {
     values: new Float64Array(cellCount(spec.grid)),
     overlaps: new Uint16Array(cellCount(spec.grid)),
   };
-  let current = new Map<string, { key: string; prepared: PreparedSource }>();
+  // A fixture whose object is the same as last time is unchanged (rig fixtures are never mutated);
+  // otherwise it is compared field by field with the last one.
+  let current = new Map<string, Entry>();
   let recomputed = 0;
 
   return {
     spec,
     update(fixtures) {
-      const next = new Map<string, { key: string; prepared: PreparedSource }>();
+      const next = new Map<string, Entry>();
       const changes: { before?: PreparedSource; after?: PreparedSource }[] = [];
       for (const fixture of fixtures) {
-        const key = fixtureKey(fixture);
         const previous = current.get(fixture.id);
-        if (previous && previous.key === key) {
-          next.set(fixture.id, previous);
+        if (previous && (previous.fixture === fixture || samePlainData(previous.fixture, fixture))) {
+          next.set(fixture.id, previous.fixture === fixture ? previous : { fixture, prepared: previous.prepared });
           continue;
         }
         const prepared = prepareSource(fixture, spec);
-        next.set(fixture.id, { key, prepared });
+        next.set(fixture.id, { fixture, prepared });
         changes.push({ before: previous?.prepared, after: prepared });
       }
       for (const [id, previous] of current) {
@@ -76,12 +100,4 @@ export function createCoverageEngine(spec: CoverageSpec): CoverageEngine {
     },
     lastRecomputed: () => recomputed,
   };
-}
-
-/** The brute-force reference: every fixture on every cell, nothing skipped. For tests and benchmarks. */
-export function bruteForceCoverage(spec: CoverageSpec, fixtures: readonly RigFixture[]): CoverageGrid {
-  const normals = cellNormals(spec);
-  const grid: CoverageGrid = { spec, values: new Float64Array(cellCount(spec.grid)), overlaps: new Uint16Array(cellCount(spec.grid)) };
-  for (const fixture of fixtures) accumulateSource(prepareSource(fixture, spec), spec, normals, grid, 1, false);
-  return grid;
 }

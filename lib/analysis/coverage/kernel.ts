@@ -1,9 +1,10 @@
 /**
- * Light from one fixture onto the cells of a coverage grid. Round beams use a tight loop with a
- * tabulated profile and only visit the cells inside the beam's edge (the model emits nothing beyond
- * it, so skipping them changes nothing); other sources are evaluated cell by cell with the exact
- * functions. Soft sources use the Lambertian point-source form beyond 5 × their size (within ~1 %)
- * and the area integral nearer (its coarse rule, within 1e-3).
+ * Light from one fixture onto the cells of a coverage grid. Round beams use the tight loop of
+ * roundKernel.ts (a tabulated profile within 1e-10 of the closed form, only the cells inside the beam's
+ * edge); other sources are evaluated cell by cell with the exact functions, oval and measured beams
+ * only inside the bounding box of their edge on the plane. Soft sources use the Lambertian
+ * point-source form beyond 5 × their size (within ~1 %) and the area integral nearer (its coarse
+ * rule, within 1e-3).
  */
 import { beamOutlineOnPlane } from '../../geometry/footprint';
 import { type Vec3, normalize, subtract, vec3 } from '../../geometry/vector';
@@ -14,6 +15,7 @@ import { fixtureIlluminanceLx, hasNoAim } from '../fixtureLight';
 import type { RigFixture } from '../rig';
 import { type CoverageSpec, cellCentreX, cellCentreY } from './grid';
 import { type ProfileTable, profileTable } from './profileTable';
+import { accumulateRound } from './roundKernel';
 
 /** The cells a source can reach: inclusive column and row ranges. */
 export interface CellRange {
@@ -28,6 +30,7 @@ export type PreparedSource =
       readonly kind: 'round';
       readonly fixture: RigFixture;
       readonly range: CellRange | null;
+      readonly mount: Vec3;
       readonly axis: Vec3;
       readonly peakCd: number;
       readonly table: ProfileTable;
@@ -112,6 +115,7 @@ export function prepareSource(fixture: RigFixture, spec: CoverageSpec): Prepared
         kind: 'round',
         fixture,
         range: source.peakCd > 0 && edge > 0 ? WHOLE(spec) : null,
+        mount: fixture.mount,
         axis: normalize(subtract(fixture.focus, fixture.mount)),
         peakCd: source.peakCd,
         table: profileTable(beamHalf, fieldHalf),
@@ -133,134 +137,12 @@ export interface AccumulateTarget {
   readonly overlaps: Uint16Array;
 }
 
-/**
- * Add (sign +1) or take away (sign −1) one prepared source's light on every cell it reaches. With
- * `cull` false every cell of the grid is evaluated (the brute-force reference).
- */
-export function accumulateSource(
-  prepared: PreparedSource,
-  spec: CoverageSpec,
-  normals: CellNormals,
-  target: AccumulateTarget,
-  sign: 1 | -1,
-  cull = true,
-): void {
-  const range = cull ? prepared.range : WHOLE(spec);
+/** Add (sign +1) or take away (sign −1) one prepared source's light on every cell it reaches. */
+export function accumulateSource(prepared: PreparedSource, spec: CoverageSpec, normals: CellNormals, target: AccumulateTarget, sign: 1 | -1): void {
+  const range = prepared.range;
   if (!range) return;
-  if (prepared.kind === 'round') accumulateRound(prepared, spec, normals, target, sign, range, cull);
+  if (prepared.kind === 'round') accumulateRound(prepared, spec, normals, target, sign);
   else accumulateCellwise(prepared.fixture, spec, normals, target, sign, range);
-}
-
-/** Whether x (along a row, relative to the fixture) is inside the cone: a·d > 0 and (a·d)² > cos²·|d|². */
-function insideCone(axisX: number, k: number, cosSquared: number, m2: number, x: number): boolean {
-  const along = axisX * x + k;
-  return along > 0 && along * along > cosSquared * (x * x + m2);
-}
-
-/**
- * The x-interval (m, relative to the fixture) where a row line at (dy, dz) from the fixture lies
- * inside the cone cos θ > cosEdge about `axis`, written to `out` as [low, high]; false if none. A cone
- * of half-angle below 90° is convex, so a line meets it in one interval: the boundaries solve
- * (a·d)² = cos²·|d|², and the pieces between them are tested for a·d > 0 and lying inside.
- */
-export function rowInterval(axis: Vec3, cosEdge: number, dy: number, dz: number, out: Float64Array): boolean {
-  const k = axis.y * dy + axis.z * dz;
-  const m2 = dy * dy + dz * dz;
-  const c2 = cosEdge * cosEdge;
-  const qa = axis.x * axis.x - c2;
-  const qb = 2 * axis.x * k;
-  const qc = k * k - c2 * m2;
-  let first = Number.NaN;
-  let second = Number.NaN;
-  if (Math.abs(qa) < 1e-12) {
-    if (Math.abs(qb) > 1e-15) first = -qc / qb;
-  } else {
-    const discriminant = qb * qb - 4 * qa * qc;
-    if (discriminant >= 0) {
-      const root = Math.sqrt(discriminant);
-      const q = -0.5 * (qb + (qb >= 0 ? root : -root));
-      if (q !== 0) {
-        first = Math.min(q / qa, qc / q);
-        second = Math.max(q / qa, qc / q);
-      } else first = 0;
-    }
-  }
-  if (Number.isNaN(first)) {
-    // No boundary: the row is wholly inside or wholly outside.
-    if (!insideCone(axis.x, k, c2, m2, 0)) return false;
-    out[0] = -Infinity;
-    out[1] = Infinity;
-    return true;
-  }
-  const last = Number.isNaN(second) ? first : second;
-  const leftInside = insideCone(axis.x, k, c2, m2, first - 1 - Math.abs(first));
-  const middleInside = !Number.isNaN(second) && insideCone(axis.x, k, c2, m2, (first + second) / 2);
-  const rightInside = insideCone(axis.x, k, c2, m2, last + 1 + Math.abs(last));
-  if (!leftInside && !middleInside && !rightInside) return false;
-  out[0] = leftInside ? -Infinity : middleInside ? first : last;
-  out[1] = rightInside ? Infinity : middleInside ? last : first;
-  return true;
-}
-
-function accumulateRound(
-  prepared: Extract<PreparedSource, { kind: 'round' }>,
-  spec: CoverageSpec,
-  normals: CellNormals,
-  target: AccumulateTarget,
-  sign: 1 | -1,
-  range: CellRange,
-  cull: boolean,
-): void {
-  const { grid } = spec;
-  const { mount } = prepared.fixture;
-  const { axis, peakCd, table } = prepared;
-  const { cosEdge, inverseOneMinusCosEdge, values: profile, intervals } = table;
-  const dz = spec.plane.heightM - mount.z;
-  const values = target.values;
-  const overlaps = target.overlaps;
-  const spacing = grid.spacingM;
-  const interval = new Float64Array(2);
-  const horizontal = normals.horizontal;
-  const normalX = normals.x;
-  const normalY = normals.y;
-  for (let row = range.firstRow; row <= range.lastRow; row += 1) {
-    const dy = grid.minY + (row + 0.5) * spacing - mount.y;
-    let firstColumn = range.firstColumn;
-    let lastColumn = range.lastColumn;
-    if (cull) {
-      // Visit only the cells of this row inside the beam's edge (one cell of margin for rounding).
-      if (!rowInterval(axis, cosEdge, dy, dz, interval)) continue;
-      const from = Math.floor((mount.x + interval[0] - grid.minX) / spacing - 0.5) - 1;
-      const to = Math.ceil((mount.x + interval[1] - grid.minX) / spacing - 0.5) + 1;
-      if (Number.isFinite(from)) firstColumn = Math.max(firstColumn, from);
-      if (Number.isFinite(to)) lastColumn = Math.min(lastColumn, to);
-    }
-    const rowStart = row * grid.columns;
-    const dy2dz2 = dy * dy + dz * dz;
-    const alongRow = dy * axis.y + dz * axis.z;
-    for (let column = firstColumn; column <= lastColumn; column += 1) {
-      const dx = grid.minX + (column + 0.5) * spacing - mount.x;
-      const distanceSquared = dx * dx + dy2dz2;
-      if (distanceSquared < 1e-12) continue;
-      const inverseDistance = 1 / Math.sqrt(distanceSquared);
-      const cosOffAxis = (dx * axis.x + alongRow) * inverseDistance;
-      // Culling skips cells beyond the edge at once; the brute-force reference evaluates them in full
-      // (the table gives 0 there), so both give the same numbers.
-      if (cull && cosOffAxis <= cosEdge) continue;
-      const index = rowStart + column;
-      // Incidence: the direction from the cell back to the fixture is −(dx, dy, dz).
-      const cosIncidence = horizontal ? -dz * inverseDistance : -(dx * normalX[index] + dy * normalY[index]) * inverseDistance;
-      if (cosIncidence <= 0) continue;
-      const oneMinusCos = 1 - cosOffAxis;
-      const position = Math.sqrt(oneMinusCos > 0 ? oneMinusCos * inverseOneMinusCosEdge : 0) * intervals;
-      const slot = position | 0;
-      if (slot >= intervals) continue; // at or beyond the model's edge: no light
-      const low = profile[slot];
-      const relative = low + (profile[slot + 1] - low) * (position - slot);
-      values[index] += sign * peakCd * relative * cosIncidence * inverseDistance * inverseDistance;
-      if (relative >= 0.5) overlaps[index] += sign;
-    }
-  }
 }
 
 function accumulateCellwise(
