@@ -159,10 +159,12 @@ export function accumulateRound(beam: RoundBeam, spec: CoverageSpec, normals: Ro
     const dy = grid.minY + (row + 0.5) * spacing - mount.y;
     // Visit only the cells of this row inside the beam's edge (one cell of margin for rounding).
     if (!rowInterval(axis, cosEdge, dy, dz, interval)) continue;
-    const from = Math.floor((interval[0] - x0) / spacing) - 1;
-    const to = Math.ceil((interval[1] - x0) / spacing) + 1;
-    const firstColumn = from > 0 ? from : 0;
-    const lastColumn = to < columns - 1 ? to : columns - 1;
+    // Clamped before rounding, so an unbounded side (±Infinity) never reaches Math.floor: the optimiser
+    // then keeps the column numbers as small integers instead of falling back to doubles.
+    const lowCell = (interval[0] - x0) / spacing;
+    const highCell = (interval[1] - x0) / spacing;
+    const firstColumn = lowCell > 1 ? Math.floor(lowCell) - 1 : 0;
+    const lastColumn = highCell < columns - 2 ? Math.ceil(highCell) + 1 : columns - 1;
     const rowStart = row * columns;
     const dy2dz2 = dy * dy + dz * dz;
     const alongRow = dy * axis.y + dz * axis.z;
@@ -193,8 +195,8 @@ export function accumulateRound(beam: RoundBeam, spec: CoverageSpec, normals: Ro
       // Every cell here is lit, so the beam-angle count is the cells with cos θ ≥ cos hb: those a cell or
       // more inside the row's beam-angle interval at once, the few near its ends one by one.
       if (rowInterval(axis, cosBeam, dy, dz, beamBounds)) {
-        const low = (beamBounds[0] - x0) / spacing;
-        const high = (beamBounds[1] - x0) / spacing;
+        const low = Math.max(-2, (beamBounds[0] - x0) / spacing);
+        const high = Math.min(columns + 1, (beamBounds[1] - x0) / spacing);
         const outerFrom = Math.max(0, Math.floor(low) - 1);
         const outerTo = Math.min(columns - 1, Math.ceil(high) + 1);
         const innerFrom = Math.max(outerFrom, Math.ceil(low) + 1);
