@@ -1,6 +1,6 @@
 'use client';
 
-import { useMemo, useState } from 'react';
+import { useId, useMemo, useState } from 'react';
 import { useEditor } from '@/components/editor/EditorContext';
 import { NumberInput } from '@/components/inputs/NumberInput';
 import { PanelSection } from '@/components/panels/PanelSection';
@@ -8,7 +8,7 @@ import { unitPlace } from '@/components/panels/labels';
 import { balanceDocument, cameraNeedsLx, defaultBalanceUnits } from '@/lib/plot';
 import { footcandlesToLux, formatIlluminance, luxToFootcandles } from '@/lib/units';
 import { BalanceProposal } from './BalanceProposal';
-import { type BalanceSettings, choiceOf, initialBalanceSettings } from './balanceSettings';
+import { type BalanceSettings, choiceOf, initialBalanceSettings, ratioProblem } from './balanceSettings';
 import { LevelSetControl } from './LevelSetControl';
 import '@/components/panels/panels.css';
 import './balance.css';
@@ -47,6 +47,8 @@ export function BalancePanel() {
   }, [document, settings]);
 
   const imperial = units === 'imperial';
+  const ratioError = ratioProblem(settings);
+  const ratioErrorId = useId();
   const cameras = document.viewpoints.filter((view) => view.camera);
   const positions = new Map(document.positions.map((position) => [position.id, position]));
   const unitName = (id: string) => {
@@ -135,18 +137,26 @@ export function BalancePanel() {
             <input
               aria-label="Lighting ratio"
               value={settings.lightingRatioText}
+              aria-invalid={ratioError ? true : undefined}
+              aria-describedby={ratioError ? ratioErrorId : undefined}
               onChange={(event) => change({ lightingRatioText: event.target.value })}
             />
           </label>
+        ) : null}
+        {settings.ratioMode === 'lighting' && ratioError ? (
+          <p className="field-error" id={ratioErrorId}>
+            {ratioError}
+          </p>
         ) : null}
         {settings.ratioMode === 'stops' ? (
           <NumberInput
             label="Key over fill"
             value={settings.keyFillStops}
             unit="stops"
-            min={-6}
+            min={0}
             max={6}
             decimals={2}
+            hint="The key is the brighter side by definition: 0 stops is key = fill"
             onCommit={(keyFillStops) => {
               change({ keyFillStops });
               return null;
@@ -155,7 +165,8 @@ export function BalancePanel() {
         ) : null}
         <p className="panel-note">
           A lighting ratio of 2:1 means key = fill, one stop between the lit and the shaded side; 3:1 is key =
-          2 × fill. In stops, 1 stop is key = 2 × fill.
+          2 × fill. In stops, 1 stop is key = 2 × fill. The key is the brighter side, so 2:1 (0 stops) is the
+          least.
         </p>
         <label className="balance-check">
           <input

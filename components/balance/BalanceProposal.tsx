@@ -3,10 +3,10 @@
 import { useEditor } from '@/components/editor/EditorContext';
 import { PanelSection } from '@/components/panels/PanelSection';
 import type { BalanceResult } from '@/lib/analysis';
-import { setLevels, subjectExposure } from '@/lib/plot';
+import { balanceRolePins, setLevels, subjectExposure } from '@/lib/plot';
 import { formatIlluminance } from '@/lib/units';
 import type { BalanceSettings } from './balanceSettings';
-import { adviceText, missText, stopsText } from './balanceText';
+import { ADVICE_CLOSER_CAUTION, ADVICE_ESTIMATE_NOTE, adviceText, missText, stopsText } from './balanceText';
 
 type Outcome = { ok: true; result: BalanceResult; keyLx: number } | { ok: false; reason: string };
 
@@ -14,7 +14,10 @@ function levelText(level: number): string {
   return `${Number.isInteger(level) ? level.toFixed(0) : level.toFixed(1)} %`;
 }
 
-/** The proposed levels and what they give each subject, with Apply (one undo step). */
+/**
+ * The proposed levels, what they give each subject and the roles Apply will keep by hand (so the rule
+ * does not swap key and fill at the new levels), with Apply (levels and roles in one undo step).
+ */
 export function BalanceProposal({
   outcome,
   settings,
@@ -48,6 +51,7 @@ export function BalanceProposal({
     level,
   }));
   const differs = changes.some((entry) => Math.abs(entry.now - entry.level) > 1e-9);
+  const pins = balanceRolePins(document, result);
   const misses = result.subjects.flatMap((subject) =>
     subject.targets.filter((target) => !target.met).map((target) => ({ subject, target })),
   );
@@ -94,16 +98,35 @@ export function BalanceProposal({
           );
         })}
       </ul>
+      {pins.length > 0 ? (
+        <div className="balance-pins">
+          <p className="panel-note">
+            At these levels the rule would give some units other roles than the balance used. Apply keeps the
+            balance’s roles by hand (change them in the subject panel):
+          </p>
+          <ul aria-label="Roles kept on Apply">
+            {pins.map((pin) => (
+              <li key={`${pin.subjectId}-${pin.fixtureId}`}>
+                {unitName(pin.fixtureId)} kept as {pin.role} on {subjectName(pin.subjectId)}
+              </li>
+            ))}
+          </ul>
+        </div>
+      ) : null}
       {misses.length > 0 ? (
         <div className="balance-misses" role="alert">
           <p>
-            <strong>Out of reach</strong> (no level is set above 100 %). Throw and beam figures are on-axis
-            estimates: light falls with the square of the throw, and a narrower beam of the same lumens has a
-            higher peak.
+            <strong>Out of reach</strong> (no level is set above 100 %).
             {result.subjects.some((subject) => subject.keyOutOfReach)
               ? ' Where the key falls short, fill and back follow the key the units can give, so the ratios hold.'
               : ''}
           </p>
+          {misses.some(({ target }) => target.advice.length > 0) ? (
+            <>
+              <p>{ADVICE_ESTIMATE_NOTE}</p>
+              <p className="balance-caution">{ADVICE_CLOSER_CAUTION}</p>
+            </>
+          ) : null}
           <ul>
             {misses.map(({ subject, target }) => (
               <li key={`${subject.id}-${target.role}`}>
@@ -127,15 +150,16 @@ export function BalanceProposal({
       <button
         type="button"
         className="panel-button balance-apply"
-        disabled={!differs}
+        disabled={!differs && pins.length === 0}
         onClick={() =>
           run(setLevels, {
             levels: result.levels,
+            roles: pins,
             label: `Balance ${count} subject${count === 1 ? '' : 's'}`,
           })
         }
       >
-        {differs ? 'Apply these levels' : 'The units are at these levels'}
+        {differs || pins.length > 0 ? 'Apply these levels' : 'The units are at these levels'}
       </button>
     </PanelSection>
   );

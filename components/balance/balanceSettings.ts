@@ -37,7 +37,21 @@ export function initialBalanceSettings(
   };
 }
 
-/** Key alone over fill alone for the settings; undefined when the ratio text cannot be read. */
+/** Why the key:fill asked for cannot be used (key ≥ fill by definition); null when it can. */
+export function ratioProblem(settings: BalanceSettings): string | null {
+  if (settings.ratioMode === 'stops')
+    return keyOverFillFromStops(settings.keyFillStops) === null
+      ? 'Key over fill must be 0 stops or more: the key is the brighter side by definition (0 stops is key = fill).'
+      : null;
+  if (settings.ratioMode !== 'lighting') return null;
+  const ratio = parseRatioText(settings.lightingRatioText);
+  if (ratio === null) return 'Give the lighting ratio as N:1 with N of 2 or more, e.g. 2:1 (key = fill).';
+  return keyOverFillFromLightingRatio(ratio) === null
+    ? 'The lighting ratio must be 2:1 or more: the key is the brighter side by definition, and 2:1 is key = fill.'
+    : null;
+}
+
+/** Key alone over fill alone for the settings; undefined when it cannot be used (see ratioProblem). */
 export function keyOverFillOf(settings: BalanceSettings): number | null | undefined {
   if (settings.ratioMode === 'none') return null;
   if (settings.ratioMode === 'stops') return keyOverFillFromStops(settings.keyFillStops) ?? undefined;
@@ -51,7 +65,7 @@ export function choiceOf(
 ): BalanceChoice | { error: string } {
   const keyOverFill = keyOverFillOf(settings);
   if (keyOverFill === undefined)
-    return { error: 'Give the lighting ratio as N:1 with N above 1, e.g. 2:1 (key = fill).' };
+    return { error: ratioProblem(settings) ?? 'The key:fill ratio cannot be used.' };
   return {
     subjectIds: settings.subjectIds,
     key: settings.key,

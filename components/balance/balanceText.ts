@@ -34,9 +34,22 @@ export function missText(target: BalanceTarget, subjectName: string, units: Unit
   }
 }
 
+/** Said once above the advice: what the throw and beam figures assume. */
+export const ADVICE_ESTIMATE_NOTE =
+  'Throw and beam figures are on-axis estimates: they hold if the face stays at the beam centre. ' +
+  'Light falls with the square of the throw; a narrower beam of the same lumens has a higher peak but ' +
+  'gives a smaller pool, so check the subject stays inside it.';
+
+/** Said once above the advice: a unit moved closer must stay far enough from people and scenery. */
+export const ADVICE_CLOSER_CAUTION =
+  'Before moving a unit closer, check the maker’s minimum distance to people and to scenery: the unit ' +
+  'runs hot, and the nearer it is, the more its beam heats what it hits. Keep at least that distance, ' +
+  'whatever the light needs.';
+
 /**
  * "Host key stand #1 at 100 % gives 364 lx; to give 520 lx move it to a throw of 2.98 m (now 3.56 m),
- * or use a 16.7° instead of a 20° beam."
+ * or use a 16.7° instead of a 20.0° beam (field 25.1°; a smaller pool)." On-axis estimates (see
+ * ADVICE_ESTIMATE_NOTE).
  */
 export function adviceText(advice: UnitAdvice, unitName: string, units: Units): string {
   const throwPart = `move it to a throw of ${formatLength(advice.throwNeededM, units)} (now ${formatLength(
@@ -45,7 +58,7 @@ export function adviceText(advice: UnitAdvice, unitName: string, units: Units): 
   )})`;
   const beam = advice.beam;
   const beamPart = beam
-    ? `, or use a ${beam.beamNeededDeg.toFixed(1)}° instead of a ${beam.beamNowDeg.toFixed(1)}° beam (field ${beam.fieldNeededDeg.toFixed(1)}°)`
+    ? `, or use a ${beam.beamNeededDeg.toFixed(1)}° instead of a ${beam.beamNowDeg.toFixed(1)}° beam (field ${beam.fieldNeededDeg.toFixed(1)}°; a smaller pool)`
     : '';
   return `${unitName} at 100 % gives ${formatIlluminance(advice.givesLx, units)}; to give ${formatIlluminance(
     advice.needsLx,

@@ -9,12 +9,21 @@ import { useEditor } from '../editor/EditorContext';
 type Pending =
   | { kind: 'none' }
   | { kind: 'bad'; fileName: string; errors: string[] }
-  | { kind: 'ready'; fileName: string; text: string; document: PlotDocument; migrations: string[] };
+  | {
+      kind: 'ready';
+      fileName: string;
+      text: string;
+      document: PlotDocument;
+      migrations: string[];
+      /** Why replacing this plot with it was refused, if it was. */
+      refused: string | null;
+    };
 
 /**
- * Open a plot file. The file is checked first; a bad file shows every problem with its path and
- * changes nothing. A good one opens as a new show, or replaces this plot after asking (one undoable
- * step; the replaced plot also stays in the show's saved history).
+ * Open a plot file. The file is checked first; a bad file (or one that cannot be read) shows every
+ * problem with its path and changes nothing. A good one opens as a new show, or replaces this plot
+ * after asking (one undoable step; the replaced plot also stays in the show's saved history); a
+ * refused replacement says why and leaves the choice open.
  */
 export function PlotFileImport() {
   const { run, setMessage, document } = useEditor();
@@ -26,7 +35,18 @@ export function PlotFileImport() {
     const file = event.target.files?.[0];
     event.target.value = '';
     if (!file) return;
-    const text = await file.text();
+    let text: string;
+    try {
+      text = await file.text();
+    } catch (error) {
+      // A DOMException (NotReadableError…) is not an Error in every engine; take its message either way.
+      const reason =
+        typeof error === 'object' && error !== null && 'message' in error && typeof error.message === 'string'
+          ? error.message
+          : String(error);
+      setPending({ kind: 'bad', fileName: file.name, errors: [`could not read ${file.name}: ${reason}`] });
+      return;
+    }
     const loaded = loadPlotText(text);
     setPending(
       loaded.ok
@@ -36,6 +56,7 @@ export function PlotFileImport() {
             text,
             document: loaded.document,
             migrations: loaded.migrations,
+            refused: null,
           }
         : { kind: 'bad', fileName: file.name, errors: loaded.errors },
     );
@@ -57,16 +78,19 @@ export function PlotFileImport() {
     router.push(`/shows/${answer.body.show.id}`);
   };
 
-  const replace = (next: PlotDocument, fileName: string) => {
+  const replace = (ready: Extract<Pending, { kind: 'ready' }>) => {
+    const { document: next, fileName } = ready;
     const ok = window.confirm(
       `Replace “${document.name}” with “${next.name}” from ${fileName}? Undo (Ctrl+Z) brings the current plot back, and its saved revisions stay in the show’s history.`,
     );
     if (!ok) return;
     const result = run(replacePlot, { document: next });
-    if (result.ok) {
-      setPending({ kind: 'none' });
-      setMessage(`Replaced the plot with ${next.name} from ${fileName}. Undo brings the previous plot back.`);
+    if (!result.ok) {
+      setPending({ ...ready, refused: result.message });
+      return;
     }
+    setPending({ kind: 'none' });
+    setMessage(`Replaced the plot with ${next.name} from ${fileName}. Undo brings the previous plot back.`);
   };
 
   return (
@@ -95,6 +119,11 @@ export function PlotFileImport() {
             {pending.fileName}: “{pending.document.name}”, {pending.document.fixtures.length} units
             {pending.migrations.length > 0 ? ` (brought up to date: ${pending.migrations.join('; ')})` : ''}.
           </p>
+          {pending.refused === null ? null : (
+            <p className="plot-import-problems" role="alert">
+              The plot was not replaced; nothing was changed: {pending.refused}
+            </p>
+          )}
           <button
             type="button"
             disabled={busy}
@@ -102,7 +131,7 @@ export function PlotFileImport() {
           >
             Open as a new show
           </button>
-          <button type="button" disabled={busy} onClick={() => replace(pending.document, pending.fileName)}>
+          <button type="button" disabled={busy} onClick={() => replace(pending)}>
             Replace this plot…
           </button>
           <button type="button" disabled={busy} onClick={() => setPending({ kind: 'none' })}>

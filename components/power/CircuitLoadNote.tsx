@@ -6,7 +6,10 @@ import { powerCheck } from '@/lib/plot';
 import { formatA, formatPct } from './format';
 import { LoadBadge } from './LoadBadge';
 
-/** Under a unit's Circuit field: the load of that circuit now, or that it is not listed. */
+/**
+ * Under a unit's Circuit field: the load of that circuit now (a planning estimate, with what it assumes
+ * and where the cautions are), or that it is not listed.
+ */
 export function CircuitLoadNote({ address }: { address: string | null }) {
   const { document } = useEditor();
   const load = useMemo(() => powerCheck(document), [document]);
@@ -26,6 +29,9 @@ export function CircuitLoadNote({ address }: { address: string | null }) {
     >
       {address} at full: {formatA(circuit.currentA)} of {circuit.ratingA} A ({formatPct(circuit.ratingPct)}){' '}
       <LoadBadge flag={circuit.flag} limitPct={load.continuousLimitPct} />
+      <span className="power-circuit-note-caveat">
+        Planning estimate: nameplate at full, unity power factor — see the Power tab.
+      </span>
     </p>
   );
 }

@@ -6,6 +6,7 @@ import { formatKg } from '@/components/panels/format';
 import { WEIGHT_CAUTION, weightCheck } from '@/lib/plot';
 import { formatPct } from './format';
 import { WeightBadge } from './LoadBadge';
+import { BENDING_ONLY_NOTE } from './weightNote';
 
 /** The weight check of one position (the same figures as the Power tab), with the rigging caution. */
 export function PositionWeightCheck({ id }: { id: string }) {
@@ -38,7 +39,7 @@ export function PositionWeightCheck({ id }: { id: string }) {
           {weight.kgPerM === null ? '' : `${weight.kgPerM.toFixed(1)} kg/m along it. `}A rating spread evenly
           assumes the load spread along the run: taking it as one span held at its ends, the units bend it{' '}
           {formatPct((weight.peakMomentKgM / weight.ratedMomentKgM) * 100)} as much as the rated load spread
-          evenly would (W·L/8).
+          evenly would (W·L/8). {BENDING_ONLY_NOTE}
         </p>
       ) : weight.ratedLoadKg !== null && weight.loadKind === 'point' ? (
         <p className="panel-note">

@@ -8,6 +8,7 @@ import type { PositionWeight } from '@/lib/analysis';
 import { WEIGHT_CAUTION, updateRigging } from '@/lib/plot';
 import { formatPct } from './format';
 import { WeightBadge } from './LoadBadge';
+import { BENDING_ONLY_NOTE } from './weightNote';
 
 /** Weight on every hanging position against its rating, the allowance per unit, and the rigging caution. */
 export function WeightSection({ weights }: { weights: readonly PositionWeight[] }) {
@@ -82,6 +83,9 @@ export function WeightSection({ weights }: { weights: readonly PositionWeight[] 
         together are flagged (&quot;Too much in one place&quot;) when, taking the run as one span held at its
         two ends, their largest bending moment is more than that of the rated load spread evenly (W·L/8).
         Exactly at a rating is within it.
+      </p>
+      <p className="panel-note" data-readout="bendingOnly">
+        {BENDING_ONLY_NOTE}
       </p>
     </PanelSection>
   );

@@ -149,11 +149,6 @@ export function phaseImbalancePct(currents: readonly number[]): number | null {
   return (Math.max(...currents.map((value) => Math.abs(value - mean))) / mean) * 100;
 }
 
-/** Total power of a balanced three-phase load, W: P = √3 · V_LL · I (unity power factor). */
-export function balancedThreePhasePower(lineVoltageV: number, currentA: number): number {
-  return Math.sqrt(3) * lineVoltageV * currentA;
-}
-
 function worst(flags: readonly LoadFlag[]): LoadFlag {
   if (flags.includes('over-rating')) return 'over-rating';
   if (flags.includes('over-limit')) return 'over-limit';

@@ -9,10 +9,11 @@
  *   together are flagged too, by bending moment: the run is taken as one span supported at its two
  *   ends, the units as point loads where their mounts project onto it (clamped to its ends), and the
  *   largest bending moment they cause is compared with that of the rated load spread evenly, W·L/8.
- *   (So one unit at mid-span may weigh half the uniform rating, since P·L/4 = W·L/8 — the same
- *   equivalence a truss load table's centre-point figure shows.) Positions hung from more points
- *   than their two ends behave differently; this is a planning prompt to ask the rigger, not a
- *   structural calculation.
+ *   This checks bending only: deflection (long spans) and shear (short ones) can limit a point load
+ *   further, so a position's own load table, where it gives a centre-point or point-load figure,
+ *   governs, and that figure can be less than half the evenly spread rating. Positions hung from
+ *   more points than their two ends behave differently; this is a planning prompt to ask the rigger,
+ *   not a structural calculation.
  * - Over means strictly above (with a relative tolerance of 1e-9); a total exactly at the rating is
  *   within it.
  * - Units of unknown weight (no type, or a type with 0 kg) are counted as 0 kg plus the allowance and

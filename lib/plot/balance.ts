@@ -1,7 +1,8 @@
 /**
  * From the document to the balance solver's plain request (lib/analysis/balance): every unit at full
  * through its filter, its level and dimming curve, whether it may change, and its beam spread when a
- * narrower beam is a possible remedy (beam types); and the targets.
+ * narrower beam is a possible remedy (beam types); and the targets. Also the roles to keep when the
+ * proposal is applied (balanceRolePins).
  */
 import {
   type BalanceRequest,
@@ -9,10 +10,12 @@ import {
   type BalanceUnit,
   type BalanceResult,
   solveBalance,
+  subjectLighting,
   unitsInBalancedRoles,
 } from '../analysis';
 import { cameraNeedsLx } from './cameraExposure';
-import { mainViewpointPosition, resolveFixture, spreadAtZoom } from './resolve';
+import type { RolePin } from './commands/looks';
+import { mainViewpointPosition, resolveFixture, resolveRig, spreadAtZoom } from './resolve';
 import type { PlotDocument } from './schema/document';
 
 /** The key light wanted: a number of lux, or what a camera viewpoint needs for a normal exposure. */
@@ -92,8 +95,12 @@ export function balanceRequest(
       reason:
         choice.key.kind === 'lux' ? 'The key light must be above 0.' : 'That viewpoint is not a camera.',
     };
-  if (choice.keyOverFill !== null && !(choice.keyOverFill > 0 && Number.isFinite(choice.keyOverFill)))
-    return { ok: false, reason: 'The key:fill ratio must be above 0.' };
+  if (choice.keyOverFill !== null && !(choice.keyOverFill >= 1 && Number.isFinite(choice.keyOverFill)))
+    return {
+      ok: false,
+      reason:
+        'Key over fill must be 1 or more: the key is the brighter side by definition (1 is key = fill).',
+    };
   if (choice.backOverKeyStops !== null && !Number.isFinite(choice.backOverKeyStops))
     return { ok: false, reason: 'Back:key must be a number of stops.' };
   return {
@@ -117,4 +124,40 @@ export function balanceDocument(
   const built = balanceRequest(document, choice);
   if (!built.ok) return built;
   return { ok: true, result: solveBalance(built.request), keyLx: built.request.keyLx };
+}
+
+/**
+ * Roles to give by hand when a proposal is applied, so that the subject panel's rule (the brightest
+ * single front unit is the key; see subjectLighting) does not re-decide them at the new levels: for
+ * each balanced subject, every unit whose role at the proposed levels (the panel's analysis, the
+ * subject's roles given by hand included) differs from the role the solve used. Only units that give
+ * the subject light at 100 % are pinned: a unit that cannot light the subject adds nothing to its
+ * key, fill or back whatever it is called.
+ */
+export function balanceRolePins(document: PlotDocument, result: BalanceResult): RolePin[] {
+  const withLevels = (levelOf: (unit: PlotDocument['fixtures'][number]) => number) =>
+    resolveRig({
+      ...document,
+      fixtures: document.fixtures.map((unit) => ({ ...unit, levelPct: levelOf(unit) })),
+    });
+  const proposedRig = withLevels((unit) => result.levels[unit.id] ?? unit.levelPct);
+  const fullRig = withLevels(() => 100);
+  const viewpoint = mainViewpointPosition(document);
+  return result.subjects.flatMap((balanced) => {
+    const person = document.subjects.find((candidate) => candidate.id === balanced.id);
+    if (!person) return [];
+    const atFull = subjectLighting(person, viewpoint, fullRig, person.roleOverrides, 'faces');
+    const lights = new Set(
+      atFull.sources
+        .filter((source) => source.faceLx > 0 || source.backLx > 0 || source.topLx > 0)
+        .map((source) => source.fixtureId),
+    );
+    const proposed = subjectLighting(person, viewpoint, proposedRig, person.roleOverrides, 'faces');
+    return document.fixtures.flatMap((unit): RolePin[] => {
+      const used = balanced.roles[unit.id];
+      const source = proposed.sources.find((candidate) => candidate.fixtureId === unit.id);
+      if (!used || !source || source.role === used || !lights.has(unit.id)) return [];
+      return [{ subjectId: person.id, fixtureId: unit.id, role: used }];
+    });
+  });
 }

@@ -30,15 +30,19 @@ export function formatRatio(ratio: number): string {
 /**
  * Key alone over fill alone from the photographers' lighting ratio (key + fill) : fill = N:1, i.e.
  * N − 1: 2:1 is key = fill (one stop between the lit and the shaded side), 3:1 is key = 2 × fill.
- * Null for N ≤ 1 (no key light) or a value that is not a number.
+ * The key is the brighter side by definition (key ≥ fill), so N is at least 2: null for N < 2 or a
+ * value that is not a number (below 2:1 the fill would outshine the key, and the roles would swap).
  */
 export function keyOverFillFromLightingRatio(ratio: number): number | null {
-  return Number.isFinite(ratio) && ratio > 1 ? ratio - 1 : null;
+  return Number.isFinite(ratio) && ratio >= 2 ? ratio - 1 : null;
 }
 
-/** Key alone over fill alone from key:fill in stops: 2^stops. */
+/**
+ * Key alone over fill alone from key:fill in stops: 2^stops. The key is the brighter side by
+ * definition, so stops are 0 (key = fill) or more: null for negative stops or a value that is not a number.
+ */
 export function keyOverFillFromStops(stops: number): number | null {
-  return Number.isFinite(stops) ? 2 ** stops : null;
+  return Number.isFinite(stops) && stops >= 0 ? 2 ** stops : null;
 }
 
 /** Reads "2:1", "2 : 1", "2.5:1" or a bare "2" as the number before the colon; null otherwise. */

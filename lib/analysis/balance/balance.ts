@@ -49,7 +49,10 @@ export interface BalanceRequest {
   readonly units: readonly BalanceUnit[];
   /** Light wanted on the face from the key side, lx. */
   readonly keyLx: number;
-  /** Key alone over fill alone (a ratio of light, not stops); null leaves fill out of the solve. */
+  /**
+   * Key alone over fill alone (a ratio of light, not stops), 1 or more: the key is the brighter side
+   * by definition; null leaves fill out of the solve.
+   */
   readonly keyOverFill: number | null;
   /** Back light over key in stops; null leaves back light out of the solve. */
   readonly backOverKeyStops: number | null;
@@ -190,8 +193,8 @@ export function solveBalance(request: BalanceRequest): BalanceResult {
   const { units, subjects } = request;
   if (!(request.keyLx > 0) || !Number.isFinite(request.keyLx))
     throw new RangeError('key light must be above 0 lx');
-  if (request.keyOverFill !== null && !(request.keyOverFill > 0 && Number.isFinite(request.keyOverFill)))
-    throw new RangeError('key over fill must be a ratio above 0');
+  if (request.keyOverFill !== null && !(request.keyOverFill >= 1 && Number.isFinite(request.keyOverFill)))
+    throw new RangeError('key over fill must be 1 or more (the key is the brighter side by definition)');
   if (request.backOverKeyStops !== null && !Number.isFinite(request.backOverKeyStops))
     throw new RangeError('back over key must be a number of stops');
   const fractions = units.map((unit) => lightFractionAtLevel(unit.levelPct, unit.dimmingCurve));

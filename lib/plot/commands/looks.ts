@@ -57,14 +57,49 @@ export const deleteLevelSet = defineCommand<{ id: string }>({
   },
 });
 
-/** Set many units' levels in one step (e.g. the balance solver's proposal). */
-export const setLevels = defineCommand<{ levels: Readonly<Record<string, number>>; label?: string }>({
+/** A role given to a source on a subject (as setRoleOverride gives one). */
+export interface RolePin {
+  readonly subjectId: string;
+  readonly fixtureId: string;
+  readonly role: LightRoleName;
+}
+
+const rolePin = z.object({
+  subjectId: z.string(),
+  fixtureId: z.string(),
+  role: z.enum(LIGHT_ROLES, { error: `must be one of ${LIGHT_ROLES.join(', ')}` }),
+});
+
+/**
+ * Set many units' levels in one step (e.g. the balance solver's proposal), and optionally give
+ * sources roles on subjects in the same step (`roles`: the balance keeps the roles its solve used,
+ * which the geometric rule could otherwise re-decide at the new levels). Every id is checked before
+ * anything changes: an unknown fixture or subject refuses the whole step.
+ */
+export const setLevels = defineCommand<{
+  levels: Readonly<Record<string, number>>;
+  roles?: readonly RolePin[];
+  label?: string;
+}>({
   name: 'levels.set',
   label: ({ levels, label }) => label ?? `Set ${Object.keys(levels).length} levels`,
-  apply(draft, { levels }) {
+  apply(draft, { levels, roles }) {
     const checkedLevels = checked(z.record(z.string(), levelPct()), levels, 'levels');
+    if (roles !== undefined && !Array.isArray(roles)) throw new CommandRefused('roles: must be a list');
+    const checkedRoles = (roles ?? []).map((pin, index) => {
+      const where = `roles[${index}]`;
+      const valid = checked(rolePin, pin, where);
+      if (!draft.subjects.some((person) => person.id === valid.subjectId))
+        throw new CommandRefused(`${where}.subjectId: there is no subject with id "${valid.subjectId}".`);
+      if (!draft.fixtures.some((unit) => unit.id === valid.fixtureId))
+        throw new CommandRefused(`${where}.fixtureId: there is no fixture with id "${valid.fixtureId}".`);
+      return valid;
+    });
     for (const [id, value] of Object.entries(checkedLevels)) {
       findOrRefuse(draft.fixtures, id, 'fixture').levelPct = value;
+    }
+    for (const pin of checkedRoles) {
+      findOrRefuse(draft.subjects, pin.subjectId, 'subject').roleOverrides[pin.fixtureId] = pin.role;
     }
   },
 });

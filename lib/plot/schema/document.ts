@@ -140,14 +140,30 @@ function referenceProblems(document: DocumentShape): { path: (string | number)[]
         });
     }
   });
-  if (
-    document.activeLevelSetId !== null &&
-    !document.levelSets.some((set) => set.id === document.activeLevelSetId)
-  )
+  const chosenIndex = document.levelSets.findIndex((set) => set.id === document.activeLevelSetId);
+  if (document.activeLevelSetId !== null && chosenIndex < 0)
     problems.push({
       path: ['activeLevelSetId'],
       message: `names a level set "${document.activeLevelSetId}" that does not exist`,
     });
+  if (chosenIndex >= 0) {
+    // The units' levels are the chosen set's levels; a file where they differ would lose one or the
+    // other at the next edit, so it is refused instead of guessed at.
+    const levels = document.levelSets[chosenIndex].levels;
+    document.fixtures.forEach((unit, index) => {
+      const kept = levels[unit.id];
+      if (kept === undefined)
+        problems.push({
+          path: ['levelSets', chosenIndex, 'levels'],
+          message: `leaves out fixtures[${index}] "${unit.id}" (at ${unit.levelPct} %) while this set is chosen`,
+        });
+      else if (kept !== unit.levelPct)
+        problems.push({
+          path: ['levelSets', chosenIndex, 'levels', unit.id],
+          message: `is ${kept} % but fixtures[${index}].levelPct is ${unit.levelPct} % while this set is chosen`,
+        });
+    });
+  }
   const feeders = new Set(document.power.feeders.map((line) => line.id));
   const addresses = new Set<string>();
   document.power.circuits.forEach((entry, index) => {

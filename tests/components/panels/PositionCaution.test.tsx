@@ -28,5 +28,10 @@ describe('the weight on a position', () => {
     expect(readout?.textContent).toContain("1 unit's weight is not known");
     expect(screen.getByRole('note').textContent).toMatch(/qualified rigger/);
     expect(screen.getByRole('note').textContent).toMatch(/safety cable/);
+    // Rated 200 kg spread evenly: the bending figure comes with what it leaves out.
+    const bending = document.querySelector('[data-readout="bending"]')?.textContent ?? '';
+    expect(bending).toContain('This checks bending only');
+    expect(bending).toContain('that figure governs; it can be less than half the evenly spread rating');
+    expect(bending).toContain('A qualified rigger decides');
   });
 });

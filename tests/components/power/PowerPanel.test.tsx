@@ -34,6 +34,9 @@ describe('the Power panel on the conference demo', () => {
     expect(
       screen.getByText(/A qualified rigger and local regulations decide.*every unit needs its safety cable/),
     ).toBeTruthy();
+    expect(document.querySelector('[data-readout="bendingOnly"]')?.textContent).toMatch(
+      /^This checks bending only\..*centre-point or point-load figure, that figure governs.*A qualified rigger decides\.$/,
+    );
     // Neutral by the phasor formula for 1900, 2800, 2320 W at 230 V.
     const [a, b, c] = [1900 / 230, 2800 / 230, 2320 / 230];
     const neutral = document.querySelector<HTMLElement>('[data-testid="power-phases"] [data-phase="N"]');
@@ -113,5 +116,6 @@ describe('the fixture inspector shows the load of the unit’s circuit', () => {
     expect(Number(note?.dataset.value)).toBeCloseTo(3200 / 230, 9);
     expect(note?.textContent).toContain('FT-2 at full: 13.91 A of 16 A (87 %)');
     expect(note?.textContent).toContain('Over 80 % limit');
+    expect(note?.textContent).toContain('Planning estimate: nameplate at full, unity power factor');
   });
 });

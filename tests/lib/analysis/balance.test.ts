@@ -281,8 +281,11 @@ describe('balancing levels', () => {
     });
     const advice = result.subjects[0].targets[0].advice[0];
     expect(advice.beam).toBeNull();
-    // Inverse square on the light at full: d·√(E/E_t).
-    expect(advice.throwNeededM).toBeCloseTo(5 * Math.sqrt(advice.givesLx / 1000), 9);
+    // A lambertian disc facing the face on its axis: E = π·L·r²/(r² + h²) (the disc's closed form) =
+    // π·10 000·0.04/25.04 = 50.184 lx at full; inverse square from there: 5·√(50.184/1000) = 1.1201 m.
+    expect(advice.givesLx).toBeCloseTo(50.184, 2);
+    expect(advice.throwNowM).toBeCloseTo(5, 9);
+    expect(advice.throwNeededM).toBeCloseTo(1.1201, 3);
   });
 
   it('narrowing for a gain of 1 keeps the beam; an impossible gain says so', () => {
@@ -298,6 +301,24 @@ describe('ratios as users give them', () => {
     // 3:1 means key = 2 × fill (1.585 stops).
     expect(keyOverFillFromLightingRatio(3)).toBe(2);
     expect(keyOverFillFromLightingRatio(1)).toBeNull();
+  });
+
+  it('below 2:1 the fill would outshine the key, so it is refused: the key is the brighter side by definition', () => {
+    // 1.5:1 would be key = 0.5 × fill (common practice: key ≥ fill, 2:1 is the even light).
+    expect(keyOverFillFromLightingRatio(1.5)).toBeNull();
+    expect(keyOverFillFromLightingRatio(1.99)).toBeNull();
+    expect(keyOverFillFromLightingRatio(Number.NaN)).toBeNull();
+    expect(keyOverFillFromStops(-0.5)).toBeNull();
+    expect(() =>
+      solveBalance({
+        subjects: [placement],
+        viewpoint: house,
+        units: [keyUnit(), fillUnit()],
+        keyLx: 200,
+        keyOverFill: 0.5,
+        backOverKeyStops: null,
+      }),
+    ).toThrow(/key over fill must be 1 or more/);
   });
 
   it('key:fill in stops: 1 stop is key = 2 × fill', () => {

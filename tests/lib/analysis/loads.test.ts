@@ -2,7 +2,6 @@ import { describe, expect, it } from 'vitest';
 import {
   type LoadSupplyInput,
   type LoadUnitInput,
-  balancedThreePhasePower,
   currentOf,
   loadFlag,
   neutralCurrent,
@@ -133,7 +132,8 @@ describe('three-phase arithmetic (star supply, unity power factor)', () => {
     );
     expect(load.lineVoltageV).toBeCloseTo(398.371686, 5);
     expect(load.totalPowerW).toBe(6900);
-    expect(balancedThreePhasePower(load.lineVoltageV ?? 0, 10)).toBeCloseTo(6900, 9);
+    // √3 · V_LL · I with the engine's line voltage and 10 A a phase gives the engine's total back.
+    expect(Math.sqrt(3) * (load.lineVoltageV ?? 0) * 10).toBeCloseTo(load.totalPowerW, 9);
     // Balanced: the phasors cancel, no neutral current, no imbalance.
     expect(load.neutralCurrentA).toBeCloseTo(0, 12);
     expect(load.imbalancePct).toBeCloseTo(0, 12);

@@ -94,6 +94,39 @@ describe('level sets', () => {
     expect(changed.fixtures[0].levelPct).toBe(55.5);
   });
 
+  it('levels with roles refuse an unknown subject, an unknown unit or a role that does not exist, changing nothing', () => {
+    const roles = (subjectId: string, fixtureId: string, role: string) =>
+      [{ subjectId, fixtureId, role }] as unknown as { subjectId: string; fixtureId: string; role: 'key' }[];
+    const levels = { [unitId]: 40 };
+    expectRefused(
+      tinyPlot(),
+      setLevels,
+      { levels, roles: roles('sub-none', unitId, 'key') },
+      /roles\[0\]\.subjectId: there is no subject with id "sub-none"/,
+    );
+    expectRefused(
+      tinyPlot(),
+      setLevels,
+      { levels, roles: roles('sub-1', 'fx-none', 'key') },
+      /roles\[0\]\.fixtureId: there is no fixture with id "fx-none"/,
+    );
+    expectRefused(
+      tinyPlot(),
+      setLevels,
+      { levels, roles: roles('sub-1', unitId, 'rim') },
+      /roles\[0\]\.role: must be one of key, fill, back, side, top/,
+    );
+  });
+
+  it('levels with a role are one undo step: the level and the subject’s role together', () => {
+    const changed = expectUndoableChange(tinyPlot(), setLevels, {
+      levels: { [unitId]: 30 },
+      roles: [{ subjectId: 'sub-1', fixtureId: unitId, role: 'fill' }],
+    });
+    expect(changed.fixtures[0].levelPct).toBe(30);
+    expect(changed.subjects[0].roleOverrides).toEqual({ [unitId]: 'fill' });
+  });
+
   it('a role override can be set and cleared', () => {
     const set = expectUndoableChange(tinyPlot(), setRoleOverride, {
       subjectId: 'sub-1',
@@ -120,5 +153,29 @@ describe('level sets', () => {
     const messages = result.error?.issues.map((issue) => `${issue.path.join('.')}: ${issue.message}`) ?? [];
     expect(messages).toContain('levelSets.0.levels.ghost: names a fixture "ghost" that does not exist');
     expect(messages).toContain('activeLevelSetId: names a level set "look-2" that does not exist');
+  });
+
+  it('a file whose chosen set disagrees with the units’ levels is refused by path, not silently rewritten', () => {
+    const plot = tinyPlot();
+    const differs = {
+      ...plot,
+      levelSets: [{ id: 'look-1', name: 'A', levels: { [unitId]: 40 } }],
+      activeLevelSetId: 'look-1',
+    };
+    const messages = (plotDocument.safeParse(differs).error?.issues ?? []).map(
+      (issue) => `${issue.path.join('.')}: ${issue.message}`,
+    );
+    expect(messages).toEqual([
+      `levelSets.0.levels.${unitId}: is 40 % but fixtures[0].levelPct is 100 % while this set is chosen`,
+    ]);
+    const missing = { ...differs, levelSets: [{ id: 'look-1', name: 'A', levels: {} }] };
+    const missingMessages = (plotDocument.safeParse(missing).error?.issues ?? []).map(
+      (issue) => issue.message,
+    );
+    expect(missingMessages).toEqual([
+      `leaves out fixtures[0] "${unitId}" (at 100 %) while this set is chosen`,
+    ]);
+    // The same set, not chosen, is a stored look like any other.
+    expect(plotDocument.safeParse({ ...differs, activeLevelSetId: null }).success).toBe(true);
   });
 });

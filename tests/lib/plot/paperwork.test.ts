@@ -85,6 +85,22 @@ describe('fixture schedule', () => {
       'fx-2',
     ]);
   });
+
+  it('CSV writes text from the file that starts like a formula as text; numbers stay bare', () => {
+    // OWASP "CSV injection": text cells starting with = + - @ get a leading apostrophe.
+    const risky: Fixture = {
+      ...unit,
+      purpose: '=HYPERLINK("x")',
+      filter: { name: '-1/2 CTO', transmission: 0.7, miredShift: -50, displayColour: '#d8e8ff' },
+      notes: '-2+3',
+    };
+    const cells = parseCsv(scheduleCsv(tinyPlot({ fixtures: [risky] })));
+    const cell = (header: string) => cells[1][cells[0].indexOf(header)];
+    expect(cell('Purpose')).toBe(`'=HYPERLINK("x")`);
+    expect(cell('Filter')).toBe("'-1/2 CTO");
+    expect(cell('Notes')).toBe("'-2+3");
+    expect(cell('Level (%)')).toBe('100');
+  });
 });
 
 describe('focus chart', () => {
