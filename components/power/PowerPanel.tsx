@@ -35,7 +35,13 @@ export function PowerPanel() {
       (line) =>
         `Feeder ${line.name} is ${line.flag === 'over-rating' ? 'over its rating' : 'over the continuous limit'} on a phase`,
     ),
-    ...(load.unlisted.length > 0 ? [`${load.unlisted.length} address(es) on units are not listed`] : []),
+    ...(load.unlisted.length > 0
+      ? [
+          load.unlisted.length === 1
+            ? '1 address on units is not listed'
+            : `${load.unlisted.length} addresses on units are not listed`,
+        ]
+      : []),
     ...positionsOver.map(
       (position) =>
         `${position.name}: ${position.flag === 'bunched' ? 'too much weight in one place' : 'over its rated load'}`,
@@ -73,7 +79,9 @@ export function PowerPanel() {
           factor. A circuit is flagged over the continuous limit above {load.continuousLimitPct} % of its
           rating, and over its rating above 100 %; exactly at either is within it.
           {load.unknownPowerUnitIds.length > 0
-            ? ` ${load.unknownPowerUnitIds.length} unit(s) have no known power and count as 0 W.`
+            ? load.unknownPowerUnitIds.length === 1
+              ? ' 1 unit has no known power and counts as 0 W.'
+              : ` ${load.unknownPowerUnitIds.length} units have no known power and count as 0 W.`
             : ''}
         </p>
       </PanelSection>

@@ -57,11 +57,11 @@ export function formatPowerText(power: ReportPower): string[] {
     );
   for (const entry of power.unlisted)
     lines.push(
-      `  not listed: ${entry.address} carries ${entry.unitIds.length} unit(s), ${watts(entry.powerW)}, ${amps(entry.currentA)}; no rating known`,
+      `  not listed: ${entry.address} carries ${unitCount(entry.unitIds.length)}, ${watts(entry.powerW)}, ${amps(entry.currentA)}; no rating known`,
     );
   if (power.noCircuitUnitIds.length > 0)
     lines.push(
-      `  no circuit given: ${power.noCircuitUnitIds.length} unit(s) (${power.noCircuitUnitIds.join(', ')})`,
+      `  no circuit given: ${unitCount(power.noCircuitUnitIds.length)} (${power.noCircuitUnitIds.join(', ')})`,
     );
   if (power.unknownPowerUnitIds.length > 0)
     lines.push(`  power not known (counted as 0 W): ${power.unknownPowerUnitIds.join(', ')}`);
@@ -124,4 +124,8 @@ export function formatWeightText(weight: ReportWeight, units: DisplayUnits): str
       `  ${position.name}: weight not known for ${position.unknownWeightUnitIds.join(', ')} (counted as 0 kg plus the allowance)`,
     );
   return lines;
+}
+
+function unitCount(count: number): string {
+  return count === 1 ? '1 unit' : `${count} units`;
 }
