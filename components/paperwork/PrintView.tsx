@@ -64,6 +64,14 @@ function TitleBlock({
   );
 }
 
+/** The cautions printed under the sheets the crew works from on the rig. */
+const SHEET_CAUTIONS = {
+  schedule:
+    'Power and weight are the fixture types’ planning figures. A qualified electrician and a qualified rigger check the rig against the local codes and the positions’ own ratings; every hung unit needs its safety cable.',
+  focus:
+    'Focus only from safe access, with the unit’s clamp and safety cable secure. Keep hot units at the maker’s minimum distance from scenery, drapes and people.',
+} as const;
+
 export function PrintView({ document, revision, sheet, paper, printedAt, editorHref }: PrintViewProps) {
   const derived = createPlotDeriver()(document);
   const pageSize = PAPER_PAGE_SIZES[paper];
@@ -91,6 +99,7 @@ export function PrintView({ document, revision, sheet, paper, printedAt, editorH
           {name === 'plan' ? <PlanDrawing document={document} derived={derived} /> : null}
           {name === 'schedule' ? <ScheduleSheet document={document} /> : null}
           {name === 'focus' ? <FocusCards document={document} /> : null}
+          {name === 'plan' ? null : <p className="print-caution">{SHEET_CAUTIONS[name]}</p>}
         </section>
       ))}
     </div>

@@ -1,19 +1,11 @@
 import { mkdir } from 'node:fs/promises';
 import path from 'node:path';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { launchBrowser, recordPageProblems } from './support/browser';
+import type { Page } from 'playwright-core';
+import { describe, expect, inject, it } from 'vitest';
+import { artifactsDir, recordPageProblems, browserForThisFile } from './support/browser';
 import { createShowFromDemo, showUrl } from './support/shows';
 
-const artifactsDir = path.resolve(import.meta.dirname, '..', '..', 'test-artifacts');
-
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = browserForThisFile();
 
 async function readout(page: Page, name: string): Promise<number> {
   return Number(await page.locator(`[data-readout="${name}"]`).first().getAttribute('data-value'));
@@ -21,7 +13,7 @@ async function readout(page: Page, name: string): Promise<number> {
 
 describe('balancing the interview demo in a real browser', () => {
   it('the host fill is called fill, then 2:1 at the camera’s exposure is applied, read back, and undone', async () => {
-    const page = await browser.newPage({ viewport: { width: 1440, height: 1000 } });
+    const page = await browser().newPage({ viewport: { width: 1440, height: 1000 } });
     const problems = recordPageProblems(page);
     const id = await createShowFromDemo(inject('baseUrl'), 'interview.json');
     await page.goto(showUrl(inject('baseUrl'), id), { waitUntil: 'load' });

@@ -1,22 +1,14 @@
 import { mkdir } from 'node:fs/promises';
 import path from 'node:path';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { describe, expect, inject, it } from 'vitest';
 import { createCoverageService } from '@/lib/analysis';
 import { createPlotDeriver, loadPlotValue } from '@/lib/plot';
 import { DEFAULT_COVERAGE, coverageRequest } from '@/components/coverage/coverageSettings';
-import { launchBrowser, recordPageProblems } from './support/browser';
+import { artifactsDir, recordPageProblems, browserForThisFile } from './support/browser';
 import { createShowFromDemo, readDemo, showUrl } from './support/shows';
 
-const artifactsDir = path.resolve(import.meta.dirname, '..', '..', 'test-artifacts');
-
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = browserForThisFile();
 
 /** The same light map computed here, in Node, on the main thread: what the browser's worker must match. */
 function expectedStatistics(document: unknown) {
@@ -42,7 +34,7 @@ async function shownAverages(page: Page): Promise<Map<string, number>> {
 
 describe('the light map of the demo conference stage', () => {
   it('shows the map, statistics equal to the Node computation, hot spots and gaps, and follows a dragged unit', async () => {
-    const page = await browser.newPage({ viewport: { width: 1440, height: 900 } });
+    const page = await browser().newPage({ viewport: { width: 1440, height: 900 } });
     const problems = recordPageProblems(page);
     const demo = readDemo('conference.json');
     const id = await createShowFromDemo(inject('baseUrl'), 'conference.json');

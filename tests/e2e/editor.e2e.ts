@@ -1,12 +1,11 @@
 import { readFileSync } from 'node:fs';
 import { mkdir } from 'node:fs/promises';
 import path from 'node:path';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { launchBrowser, recordPageProblems } from './support/browser';
+import type { Page } from 'playwright-core';
+import { describe, expect, inject, it } from 'vitest';
+import { artifactsDir, recordPageProblems, browserForThisFile } from './support/browser';
 import { createShowFromDemo, showUrl } from './support/shows';
 
-const artifactsDir = path.resolve(import.meta.dirname, '..', '..', 'test-artifacts');
 const demo = JSON.parse(
   readFileSync(
     path.resolve(import.meta.dirname, '..', '..', 'public', 'demo', 'studio-theatre.json'),
@@ -21,13 +20,7 @@ async function openStudioTheatre(page: Page): Promise<void> {
   await page.goto(showUrl(inject('baseUrl'), id), { waitUntil: 'load' });
 }
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = browserForThisFile();
 
 interface View {
   left: number;
@@ -76,7 +69,7 @@ async function readoutText(page: Page, name: string): Promise<string> {
 
 describe('editing the demo plot in a real browser', () => {
   it('drag a focus point: throw, pool and centre level follow the photometry; undo restores them', async () => {
-    const page = await browser.newPage({ viewport: { width: 1440, height: 900 } });
+    const page = await browser().newPage({ viewport: { width: 1440, height: 900 } });
     const problems = recordPageProblems(page);
     await openStudioTheatre(page);
     await page.getByTestId('plan-canvas').locator('canvas').first().waitFor({ state: 'visible' });
@@ -151,7 +144,7 @@ describe('editing the demo plot in a real browser', () => {
   });
 
   it('switching units shows feet and foot-candles; a bad value shows its message and changes nothing', async () => {
-    const page = await browser.newPage({ viewport: { width: 1440, height: 900 } });
+    const page = await browser().newPage({ viewport: { width: 1440, height: 900 } });
     const problems = recordPageProblems(page);
     await openStudioTheatre(page);
     await page.getByTestId('plan-canvas').locator('canvas').first().waitFor({ state: 'visible' });
@@ -188,7 +181,7 @@ describe('editing the demo plot in a real browser', () => {
 
 describe('a first-time task: hang a unit and aim it at a performer', () => {
   it('hangs a unit on LX 3 with the next unit number, aims it at Ilse and shows its throw, pool and level', async () => {
-    const page = await browser.newPage({ viewport: { width: 1440, height: 900 } });
+    const page = await browser().newPage({ viewport: { width: 1440, height: 900 } });
     const problems = recordPageProblems(page);
     await openStudioTheatre(page);
     await page.getByTestId('plan-canvas').locator('canvas').first().waitFor({ state: 'visible' });

@@ -1,24 +1,13 @@
 import { mkdir } from 'node:fs/promises';
 import path from 'node:path';
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { launchBrowser, recordPageProblems } from './support/browser';
+import { describe, expect, inject, it } from 'vitest';
+import { artifactsDir, recordPageProblems, browserForThisFile } from './support/browser';
 
-const artifactsDir = path.resolve(import.meta.dirname, '..', '..', 'test-artifacts');
-
-let browser: Browser;
-
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = browserForThisFile();
 
 describe('home page', () => {
   it('lists the demo shows, opens the studio-theatre plot in one click, draws the stage plan, and logs no errors or failed requests', async () => {
-    const page = await browser.newPage({ viewport: { width: 1280, height: 800 } });
+    const page = await browser().newPage({ viewport: { width: 1280, height: 800 } });
     const problems = recordPageProblems(page);
 
     const response = await page.goto(inject('baseUrl'), { waitUntil: 'load' });

@@ -1,13 +1,12 @@
 import { readFileSync } from 'node:fs';
 import { mkdir } from 'node:fs/promises';
 import path from 'node:path';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { describe, expect, inject, it } from 'vitest';
 import { cosinePower, range, writeLm63 } from '../lib/formats/synthetic';
-import { launchBrowser, recordPageProblems } from './support/browser';
+import { artifactsDir, recordPageProblems, browserForThisFile } from './support/browser';
 import { createShowFromDemo, showUrl } from './support/shows';
 
-const artifactsDir = path.resolve(import.meta.dirname, '..', '..', 'test-artifacts');
 const demo = JSON.parse(
   readFileSync(
     path.resolve(import.meta.dirname, '..', '..', 'public', 'demo', 'studio-theatre.json'),
@@ -16,13 +15,7 @@ const demo = JSON.parse(
 );
 const special = demo.fixtures.find((unit: { id: string }) => unit.id === 'fx-7');
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = browserForThisFile();
 
 /** Page coordinates of a plan point (audience at the bottom), from the plan's view attributes. */
 async function pageAt(page: Page, point: { x: number; y: number }) {
@@ -61,7 +54,7 @@ describe('the fixture library in a real browser', () => {
     expect(FIELD_DEG).toBeCloseTo(53.938, 3);
     expect(LUMENS).toBeCloseTo(8975.98, 1);
 
-    const page = await browser.newPage({ viewport: { width: 1440, height: 900 } });
+    const page = await browser().newPage({ viewport: { width: 1440, height: 900 } });
     const problems = recordPageProblems(page);
     const id = await createShowFromDemo(inject('baseUrl'), 'studio-theatre.json');
     await page.goto(showUrl(inject('baseUrl'), id), { waitUntil: 'load' });

@@ -1,19 +1,11 @@
 import { mkdir } from 'node:fs/promises';
 import path from 'node:path';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { launchBrowser, recordPageProblems } from './support/browser';
+import type { Page } from 'playwright-core';
+import { describe, expect, inject, it } from 'vitest';
+import { artifactsDir, recordPageProblems, browserForThisFile } from './support/browser';
 import { createShowFromDemo, showUrl } from './support/shows';
 
-const artifactsDir = path.resolve(import.meta.dirname, '..', '..', 'test-artifacts');
-
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = browserForThisFile();
 
 const row = (page: Page, address: string) => page.locator(`[data-circuit="${address}"]`);
 
@@ -28,7 +20,7 @@ async function putOnCircuit(page: Page, unitLabel: RegExp, address: string): Pro
 
 describe('power check on the demo conference stage', () => {
   it('flags FT-2 over its limit and then over its rating as washes are put on it, with the right amps', async () => {
-    const page = await browser.newPage({ viewport: { width: 1440, height: 1000 } });
+    const page = await browser().newPage({ viewport: { width: 1440, height: 1000 } });
     const problems = recordPageProblems(page);
     const id = await createShowFromDemo(inject('baseUrl'), 'conference.json');
     await page.goto(showUrl(inject('baseUrl'), id), { waitUntil: 'load' });

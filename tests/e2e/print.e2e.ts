@@ -1,21 +1,13 @@
 import { mkdirSync, readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { launchBrowser, recordPageProblems } from './support/browser';
+import type { Page } from 'playwright-core';
+import { describe, expect, inject, it } from 'vitest';
+import { artifactsDir, recordPageProblems, browserForThisFile } from './support/browser';
 import { createShowFromDemo, readDemo, showUrl } from './support/shows';
 import { loadPlotText } from '@/lib/plot';
 import { parseCsv } from '@/lib/plot/csv';
 
-const artifactsDir = path.resolve(import.meta.dirname, '..', '..', 'test-artifacts');
-
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = browserForThisFile();
 
 /** Width of a printable area in CSS px (96 px per inch): paper minus the two 12 mm margins. */
 const printableWidthPx = (paperMm: number) => Math.round(((paperMm - 24) / 25.4) * 96);
@@ -39,7 +31,7 @@ describe('print view', () => {
     const baseUrl = inject('baseUrl');
     const demo = readDemo('conference.json');
     const id = await createShowFromDemo(baseUrl, 'conference.json');
-    const page = await browser.newPage({ viewport: { width: printableWidthPx(210), height: 1000 } });
+    const page = await browser().newPage({ viewport: { width: printableWidthPx(210), height: 1000 } });
     const problems = recordPageProblems(page);
     await openPrint(page, new URL(`/shows/${id}/print?sheet=all&paper=a4`, baseUrl).toString());
 
@@ -98,7 +90,7 @@ describe('print view', () => {
   it('prints one sheet on Letter paper when asked (Letter = 612 × 792 pt)', async () => {
     const baseUrl = inject('baseUrl');
     const id = await createShowFromDemo(baseUrl, 'conference.json');
-    const page = await browser.newPage();
+    const page = await browser().newPage();
     await openPrint(page, new URL(`/shows/${id}/print?sheet=focus&paper=letter`, baseUrl).toString());
     expect(await page.getByTestId('title-block').count()).toBe(1);
     expect(await page.locator('.print-sheet-focus').count()).toBe(1);
@@ -112,7 +104,7 @@ describe('print view', () => {
     const baseUrl = inject('baseUrl');
     const demo = readDemo('studio-theatre.json');
     const id = await createShowFromDemo(baseUrl, 'studio-theatre.json');
-    const page = await browser.newPage({
+    const page = await browser().newPage({
       viewport: { width: Math.round(((297 - 20) / 25.4) * 96), height: 900 },
     });
     await openPrint(page, new URL(`/shows/${id}/print?sheet=plot&paper=a4`, baseUrl).toString());
@@ -143,7 +135,7 @@ describe('paperwork in the editor', () => {
     const baseUrl = inject('baseUrl');
     const demo = readDemo('conference.json');
     const id = await createShowFromDemo(baseUrl, 'conference.json');
-    const page = await browser.newPage({ viewport: { width: 1440, height: 900 }, acceptDownloads: true });
+    const page = await browser().newPage({ viewport: { width: 1440, height: 900 }, acceptDownloads: true });
     const problems = recordPageProblems(page);
     await page.goto(showUrl(baseUrl, id), { waitUntil: 'load' });
     const canvas = page.getByTestId('plan-canvas');

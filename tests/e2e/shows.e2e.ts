@@ -1,21 +1,13 @@
 import { mkdirSync, mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { launchBrowser, recordPageProblems } from './support/browser';
+import type { Page } from 'playwright-core';
+import { describe, expect, inject, it } from 'vitest';
+import { artifactsDir, recordPageProblems, browserForThisFile } from './support/browser';
 import { freePort, host, startServer, stopServer } from './support/server';
 import { createShowFromDemo, showUrl } from './support/shows';
 
-const artifactsDir = path.resolve(import.meta.dirname, '..', '..', 'test-artifacts');
-
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = browserForThisFile();
 
 async function openEditor(page: Page, url: string): Promise<void> {
   await page.goto(url, { waitUntil: 'load' });
@@ -49,7 +41,7 @@ describe('shows saved on the server', () => {
   it('autosaves an edit as a new revision, and the edit is there after a reload', async () => {
     const baseUrl = inject('baseUrl');
     const id = await createShowFromDemo(baseUrl, 'studio-theatre.json');
-    const page = await browser.newPage({ viewport: { width: 1440, height: 900 } });
+    const page = await browser().newPage({ viewport: { width: 1440, height: 900 } });
     const problems = recordPageProblems(page);
     await openEditor(page, showUrl(baseUrl, id));
     expect(await saveState(page)).toEqual({ state: 'saved', revision: 1 });
@@ -83,8 +75,8 @@ describe('shows saved on the server', () => {
   it('a conflicting save is refused and offered back: saved on top, both revisions kept', async () => {
     const baseUrl = inject('baseUrl');
     const id = await createShowFromDemo(baseUrl, 'interview.json');
-    const first = await browser.newPage({ viewport: { width: 1440, height: 900 } });
-    const second = await browser.newPage({ viewport: { width: 1440, height: 900 } });
+    const first = await browser().newPage({ viewport: { width: 1440, height: 900 } });
+    const second = await browser().newPage({ viewport: { width: 1440, height: 900 } });
     await openEditor(first, showUrl(baseUrl, id));
     await openEditor(second, showUrl(baseUrl, id));
 
@@ -121,7 +113,7 @@ describe('shows saved on the server', () => {
     const port = await freePort();
     const baseUrl = `http://${host}:${port}`;
     let server = await startServer(port, databaseFile);
-    const context = await browser.newContext({ viewport: { width: 1440, height: 900 } });
+    const context = await browser().newContext({ viewport: { width: 1440, height: 900 } });
     try {
       const id = await createShowFromDemo(baseUrl, 'conference.json');
       const page = await context.newPage();

@@ -1,4 +1,9 @@
+import path from 'node:path';
 import { type Browser, type Page, chromium } from 'playwright-core';
+import { afterAll, beforeAll } from 'vitest';
+
+/** Where browser tests leave their screenshots and files for people to look at. */
+export const artifactsDir = path.resolve(import.meta.dirname, '..', '..', '..', 'test-artifacts');
 
 /** Launches the system Chromium (never a downloaded one); CHROMIUM_PATH overrides the default path. */
 export function launchBrowser(): Promise<Browser> {
@@ -15,6 +20,21 @@ export function launchBrowser(): Promise<Browser> {
       '--disable-sync',
     ],
   });
+}
+
+/** One browser for a test file: launched before its tests and closed after them. Returns a getter. */
+export function browserForThisFile(): () => Browser {
+  let browser: Browser | undefined;
+  beforeAll(async () => {
+    browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+  return () => {
+    if (!browser) throw new Error('the browser for this test file is not running');
+    return browser;
+  };
 }
 
 /** Problems a page reported while it was open: console errors, uncaught exceptions, failed requests. */
