@@ -70,7 +70,7 @@ export function PowerPanel() {
       </div>
       <CircuitSection load={load} />
       <TotalsSection load={load} />
-      <SupplySection />
+      <SupplySection lineVoltageV={load.lineVoltageV} />
       <WeightSection weights={weights} />
       <PanelSection title="How loads are taken">
         <p className="panel-note">

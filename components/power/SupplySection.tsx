@@ -8,8 +8,11 @@ import { PanelSection } from '@/components/panels/PanelSection';
 import { outcomeOf } from '@/components/panels/format';
 import { addFeeder, deleteFeeder, updateFeeder, updateSupply } from '@/lib/plot';
 
-/** The supply (single or three phase, voltage, continuous limit) and its feeders. */
-export function SupplySection() {
+/**
+ * The supply (single or three phase, voltage, continuous limit) and its feeders. `lineVoltageV` is the
+ * load check's line-to-line voltage (null on a single phase).
+ */
+export function SupplySection({ lineVoltageV }: { lineVoltageV: number | null }) {
   const { document, run } = useEditor();
   const power = document.power;
   return (
@@ -46,9 +49,9 @@ export function SupplySection() {
             onCommit={(continuousLimitPct) => outcomeOf(run(updateSupply, { continuousLimitPct }))}
           />
         </div>
-        {power.system === 'three' ? (
+        {lineVoltageV !== null ? (
           <p className="panel-note" data-readout="lineVoltage">
-            Line to line: √3 × {power.phaseVoltageV} V = {(Math.sqrt(3) * power.phaseVoltageV).toFixed(0)} V.
+            Line to line: √3 × {power.phaseVoltageV} V = {lineVoltageV.toFixed(0)} V.
           </p>
         ) : null}
       </PanelSection>

@@ -30,6 +30,10 @@ describe('the Power panel on the conference demo', () => {
     expect(ft2.textContent).toContain('2800 W · 12.17 A of 16 A · 76 %');
     expect(within(ft2).getByText('OK')).toBeTruthy();
     expect(screen.getByTestId('power-summary').textContent).toContain('Nothing over a rating');
+    // Three-phase star supply: line to line = √3 × 230 V = 398.4 V (published three-phase relation).
+    expect(document.querySelector('[data-readout="lineVoltage"]')?.textContent).toBe(
+      'Line to line: √3 × 230 V = 398 V.',
+    );
     expect(screen.getByText(/A qualified electrician and the local electrical code decide/)).toBeTruthy();
     expect(
       screen.getByText(/A qualified rigger and local regulations decide.*every unit needs its safety cable/),
