@@ -39,6 +39,15 @@ export default defineConfig(
     },
   },
   {
+    // CommonJS entry points for Node worker threads (they load tsx's require hook before TypeScript).
+    files: ['scripts/**/*.cjs'],
+    languageOptions: {
+      sourceType: 'commonjs',
+      globals: { require: 'readonly', module: 'writable', __dirname: 'readonly' },
+    },
+    rules: { '@typescript-eslint/no-require-imports': 'off' },
+  },
+  {
     // Tests spoil documents on purpose to check the error messages; `any` is the honest type there.
     files: ['tests/**'],
     rules: { '@typescript-eslint/no-explicit-any': 'off' },

@@ -6,9 +6,12 @@
 import {
   type CoverageSpec,
   type RigFixture,
+  type ShareHelper,
+  type SharePort,
   bruteForceCoverage,
   createCoverageEngine,
   gridOver,
+  shareHelperOverPort,
 } from '../lib/analysis';
 import {
   PROFILE_EDGE_FRACTION,
@@ -20,6 +23,9 @@ import {
 import { footprintOnPlane, vec3 } from '../lib/geometry';
 import { seededRandom } from '../lib/seededRandom';
 import { readFileSync } from 'node:fs';
+import { availableParallelism } from 'node:os';
+import path from 'node:path';
+import { MessageChannel, Worker } from 'node:worker_threads';
 import { loadPlotText, reportCoverage } from '../lib/plot';
 
 function median(values: number[]): number {
@@ -56,6 +62,54 @@ function measure(
 
 function time(runs: number, work: () => unknown): number {
   return measure(runs, work).wallMs;
+}
+
+/** Median wall-clock times of two pieces of work measured in turn (A, B, A, B, …), so both meet the same noise. */
+async function measurePair(
+  runs: number,
+  first: () => unknown,
+  second: () => Promise<unknown>,
+): Promise<{ firstMs: number; secondMs: number }> {
+  for (let run = 0; run < 3; run += 1) {
+    first();
+    await second();
+  }
+  const a: number[] = [];
+  const b: number[] = [];
+  for (let run = 0; run < runs; run += 1) {
+    let start = performance.now();
+    first();
+    a.push(performance.now() - start);
+    start = performance.now();
+    await second();
+    b.push(performance.now() - start);
+  }
+  return { firstMs: round3(median(a)), secondMs: round3(median(b)) };
+}
+
+/**
+ * Worker threads that take a share of the rows of a full recompute, as the app's helper Web Workers do:
+ * one per core beyond the first, at most three (components/coverage/useCoverage.ts).
+ */
+function startHelpers(): { helpers: ShareHelper[]; stop: () => Promise<void> } {
+  const count = Math.min(3, Math.max(0, availableParallelism() - 1));
+  const started = Array.from({ length: count }, () => {
+    const channel = new MessageChannel();
+    const worker = new Worker(path.join(__dirname, 'coverageShareThread.cjs'), {
+      workerData: { port: channel.port2 },
+      transferList: [channel.port2],
+    });
+    return { worker, port: channel.port1 };
+  });
+  return {
+    helpers: started.map(({ port }) => shareHelperOverPort(port as unknown as SharePort)),
+    stop: async () => {
+      for (const { worker, port } of started) {
+        port.close();
+        await worker.terminate();
+      }
+    },
+  };
 }
 
 function print(record: Record<string, unknown>): void {
@@ -161,143 +215,208 @@ const spec: CoverageSpec = {
   plane: { kind: 'horizontal', heightM: 1.6 },
 };
 const cells = spec.grid.columns * spec.grid.rows;
-for (const count of [50, 300, 1000]) {
-  const fixtures = rig(count, count);
-  // The first computation (on the 50-unit line this also builds the profile tables of the 18 beam types
-  // and warms up the JIT; the larger rigs reuse them).
-  const coldStart = performance.now();
-  const engine = createCoverageEngine(spec);
-  const culled = Float64Array.from(engine.update(fixtures).values);
-  const culledOverlaps = Uint16Array.from(engine.update(fixtures).overlaps);
-  const coldMs = round3(performance.now() - coldStart);
-  // Full recompute: every unit changed (all levels nudged, as a master fader would), on the engine
-  // that is kept between updates as the app's service keeps it.
-  const nudged = fixtures.map((fixture) =>
-    fixture.source.kind === 'beam'
-      ? { ...fixture, source: { ...fixture.source, peakCd: fixture.source.peakCd * 1.000001 } }
-      : fixture,
-  );
-  let flip = false;
-  const full = measure(count >= 1000 ? 11 : 31, () => {
-    flip = !flip;
-    engine.update(flip ? nudged : fixtures);
-    if (engine.lastRecomputed() !== count) throw new Error('the full recompute did not recompute every unit');
-  });
-  engine.update(fixtures);
-  // A new engine (its arrays allocated) computing every unit, for comparison.
-  const fresh = measure(count >= 1000 ? 7 : 15, () => createCoverageEngine(spec).update(fixtures));
-  let step = 0;
-  const incremental = measure(41, () => {
-    step += 1;
-    const moved = fixtures.map((fixture, index) =>
-      index === 0
-        ? { ...fixture, focus: vec3(fixture.focus.x + 0.01 * (step % 7), fixture.focus.y, 1.6) }
+
+async function coverageBenchmarks(): Promise<void> {
+  const sharing = startHelpers();
+  for (const count of [50, 300, 1000]) {
+    const fixtures = rig(count, count);
+    // The first computation (on the 50-unit line this also builds the profile tables of the 18 beam types
+    // and warms up the JIT; the larger rigs reuse them).
+    const coldStart = performance.now();
+    const engine = createCoverageEngine(spec);
+    const culled = Float64Array.from(engine.update(fixtures).values);
+    const culledOverlaps = Uint16Array.from(engine.update(fixtures).overlaps);
+    const coldMs = round3(performance.now() - coldStart);
+    // Full recompute: every unit changed (all levels nudged, as a master fader would), on the engine
+    // that is kept between updates as the app's service keeps it.
+    const nudged = fixtures.map((fixture) =>
+      fixture.source.kind === 'beam'
+        ? { ...fixture, source: { ...fixture.source, peakCd: fixture.source.peakCd * 1.000001 } }
         : fixture,
     );
-    engine.update(moved);
-  });
-  // The same, with every unit a new object of equal values, as the Web Worker receives the rig
-  // (the copies are made before timing).
-  const copies = Array.from({ length: 44 }, () => structuredClone(fixtures));
-  let copy = 0;
-  const incrementalCloned = measure(41, () => {
-    step += 1;
-    const moved = copies[copy++].map((fixture, index) =>
-      index === 0
-        ? { ...fixture, focus: vec3(fixture.focus.x + 0.01 * (step % 7), fixture.focus.y, 1.6) }
-        : fixture,
+    let flip = false;
+    const full = measure(count >= 1000 ? 11 : 31, () => {
+      flip = !flip;
+      engine.update(flip ? nudged : fixtures);
+      if (engine.lastRecomputed() !== count)
+        throw new Error('the full recompute did not recompute every unit');
+    });
+    engine.update(fixtures);
+    // A new engine (its arrays allocated) computing every unit, for comparison.
+    const fresh = measure(count >= 1000 ? 7 : 15, () => createCoverageEngine(spec).update(fixtures));
+    // The same full recompute shared with the helper threads, as the app's light-map worker does,
+    // measured in turn with the one-thread engine so that both meet the same noise.
+    const threads = sharing.helpers.length + 1;
+    const oneThread = createCoverageEngine(spec);
+    const shared = createCoverageEngine(spec);
+    let oneFlip = false;
+    let sharedFlip = false;
+    const pair = await measurePair(
+      count >= 1000 ? 11 : 31,
+      () => {
+        oneFlip = !oneFlip;
+        oneThread.update(oneFlip ? nudged : fixtures);
+      },
+      async () => {
+        sharedFlip = !sharedFlip;
+        await shared.updateSharing(sharedFlip ? nudged : fixtures, sharing.helpers);
+        if (shared.lastThreads() !== threads) throw new Error('the full recompute was not shared out');
+      },
     );
-    engine.update(moved);
-  });
-  const afterIncremental = Float64Array.from(engine.update(fixtures).values);
-  // The reference takes seconds per run (about 2 µs per unit × cell), so few runs and no warm-up.
-  let brute = bruteForceCoverage(spec, []);
-  const bruteForce = measure(count <= 50 ? 3 : 1, () => (brute = bruteForceCoverage(spec, fixtures)), 0);
-  let lean: Float64Array = new Float64Array(0);
-  const leanBrute = measure(3, () => (lean = leanBruteForce(spec, fixtures)), 1);
-  const difference = maxRelativeDifference(culled, brute.values);
-  let overlapsEqual = true;
-  for (let index = 0; index < cells; index += 1)
-    if (culledOverlaps[index] !== brute.overlaps[index]) overlapsEqual = false;
-  print({
-    name: 'coverage',
-    fixtures: count,
-    cells,
-    firstUpdateMs: coldMs,
-    fullRecomputeMedianMs: full.wallMs,
-    fullRecomputeCpuMedianMs: full.cpuMs,
-    newEngineMedianMs: fresh.wallMs,
-    newEngineCpuMedianMs: fresh.cpuMs,
-    incrementalMedianMs: incremental.wallMs,
-    incrementalCpuMedianMs: incremental.cpuMs,
-    incrementalClonedRigMedianMs: incrementalCloned.wallMs,
-    bruteForceMedianMs: bruteForce.wallMs,
-    bruteForceRuns: count <= 50 ? 3 : 1,
-    speedupOverBruteForce: Number((bruteForce.wallMs / full.wallMs).toFixed(1)),
-    leanBruteForceMedianMs: leanBrute.wallMs,
-    speedupOverLeanBruteForce: Number((leanBrute.wallMs / full.wallMs).toFixed(1)),
-    maxRelativeDifference: difference.max,
-    maxRelativeDifferenceAfterIncremental: maxRelativeDifference(afterIncremental, brute.values).max,
-    maxRelativeDifferenceLean: maxRelativeDifference(lean, brute.values).max,
-    cellsCompared: difference.cellsCompared,
-    overlapsEqual,
-    targets:
-      count === 300
-        ? { fullRecomputeMs: 16, incrementalMs: 2, speedup: 10, maxRelativeDifference: 1e-9 }
-        : undefined,
-  });
+    const sharedGrid = await createCoverageEngine(spec).updateSharing(fixtures, sharing.helpers);
+    let sharedSameToTheBit = true;
+    for (let index = 0; index < cells; index += 1) {
+      if (
+        !Object.is(sharedGrid.values[index], culled[index]) ||
+        sharedGrid.overlaps[index] !== culledOverlaps[index]
+      )
+        sharedSameToTheBit = false;
+    }
+    let step = 0;
+    const incremental = measure(41, () => {
+      step += 1;
+      const moved = fixtures.map((fixture, index) =>
+        index === 0
+          ? { ...fixture, focus: vec3(fixture.focus.x + 0.01 * (step % 7), fixture.focus.y, 1.6) }
+          : fixture,
+      );
+      engine.update(moved);
+    });
+    // The same, with every unit a new object of equal values, as the Web Worker receives the rig
+    // (the copies are made before timing).
+    const copies = Array.from({ length: 44 }, () => structuredClone(fixtures));
+    let copy = 0;
+    const incrementalCloned = measure(41, () => {
+      step += 1;
+      const moved = copies[copy++].map((fixture, index) =>
+        index === 0
+          ? { ...fixture, focus: vec3(fixture.focus.x + 0.01 * (step % 7), fixture.focus.y, 1.6) }
+          : fixture,
+      );
+      engine.update(moved);
+    });
+    // One moved unit through the shared path (as the app's worker asks): done on its own thread, no helpers.
+    const sharedSteps: number[] = [];
+    for (let run = 0; run < 44; run += 1) {
+      step += 1;
+      const moved = fixtures.map((fixture, index) =>
+        index === 0
+          ? { ...fixture, focus: vec3(fixture.focus.x + 0.01 * (step % 7), fixture.focus.y, 1.6) }
+          : fixture,
+      );
+      const start = performance.now();
+      await shared.updateSharing(moved, sharing.helpers);
+      if (run >= 3) sharedSteps.push(performance.now() - start);
+      if (shared.lastThreads() !== 1) throw new Error('a one-unit change was shared out');
+    }
+    const afterIncremental = Float64Array.from(engine.update(fixtures).values);
+    // The reference takes seconds per run (about 2 µs per unit × cell), so few runs and no warm-up.
+    let brute = bruteForceCoverage(spec, []);
+    const bruteForce = measure(count <= 50 ? 3 : 1, () => (brute = bruteForceCoverage(spec, fixtures)), 0);
+    let lean: Float64Array = new Float64Array(0);
+    const leanBrute = measure(3, () => (lean = leanBruteForce(spec, fixtures)), 1);
+    const difference = maxRelativeDifference(culled, brute.values);
+    let overlapsEqual = true;
+    for (let index = 0; index < cells; index += 1)
+      if (culledOverlaps[index] !== brute.overlaps[index]) overlapsEqual = false;
+    print({
+      name: 'coverage',
+      fixtures: count,
+      cells,
+      firstUpdateMs: coldMs,
+      fullRecomputeMedianMs: full.wallMs,
+      fullRecomputeCpuMedianMs: full.cpuMs,
+      newEngineMedianMs: fresh.wallMs,
+      newEngineCpuMedianMs: fresh.cpuMs,
+      incrementalMedianMs: incremental.wallMs,
+      incrementalCpuMedianMs: incremental.cpuMs,
+      incrementalClonedRigMedianMs: incrementalCloned.wallMs,
+      incrementalSharedPathMedianMs: round3(median(sharedSteps)),
+      threads,
+      fullRecomputeSharedMedianMs: pair.secondMs,
+      fullRecomputeOneThreadInTurnMedianMs: pair.firstMs,
+      sharedSpeedup: Number((pair.firstMs / pair.secondMs).toFixed(2)),
+      sharedSameToTheBit,
+      bruteForceMedianMs: bruteForce.wallMs,
+      bruteForceRuns: count <= 50 ? 3 : 1,
+      speedupOverBruteForce: Number((bruteForce.wallMs / full.wallMs).toFixed(1)),
+      speedupOverBruteForceShared: Number((bruteForce.wallMs / pair.secondMs).toFixed(1)),
+      leanBruteForceMedianMs: leanBrute.wallMs,
+      speedupOverLeanBruteForce: Number((leanBrute.wallMs / full.wallMs).toFixed(1)),
+      maxRelativeDifference: difference.max,
+      maxRelativeDifferenceAfterIncremental: maxRelativeDifference(afterIncremental, brute.values).max,
+      maxRelativeDifferenceLean: maxRelativeDifference(lean, brute.values).max,
+      cellsCompared: difference.cellsCompared,
+      overlapsEqual,
+      targets:
+        count === 300
+          ? { fullRecomputeMs: 16, incrementalMs: 2, speedup: 10, maxRelativeDifference: 1e-9 }
+          : undefined,
+    });
+  }
+  await sharing.stop();
 }
 
 // The demo shows' light maps (0.1 m grid, focus plane): soft sources near faces take the area integral.
-for (const file of ['studio-theatre.json', 'interview.json', 'conference.json']) {
-  const loaded = loadPlotText(readFileSync(`public/demo/${file}`, 'utf8'));
-  if (!loaded.ok) throw new Error(`${file}: ${loaded.errors.join('; ')}`);
-  const document = loaded.document;
-  print({
-    name: 'demo light map, full recompute',
-    show: file,
-    fixtures: document.fixtures.length,
-    softTypes: document.fixtureTypes.filter((type) => type.photometry.kind === 'soft').length,
-    medianMs: time(5, () => reportCoverage(document)),
-  });
+function demoBenchmarks(): void {
+  for (const file of ['studio-theatre.json', 'interview.json', 'conference.json']) {
+    const loaded = loadPlotText(readFileSync(`public/demo/${file}`, 'utf8'));
+    if (!loaded.ok) throw new Error(`${file}: ${loaded.errors.join('; ')}`);
+    const document = loaded.document;
+    print({
+      name: 'demo light map, full recompute',
+      show: file,
+      fixtures: document.fixtures.length,
+      softTypes: document.fixtureTypes.filter((type) => type.photometry.kind === 'soft').length,
+      medianMs: time(5, () => reportCoverage(document)),
+    });
+  }
 }
 
 // Single evaluations of the photometry core.
-const mount = vec3(0, -3, 7);
-const spread = { kind: 'round', beamAngleDeg: 26, fieldAngleDeg: 40 } as const;
-print({
-  name: 'point-source beam at one point (exact profile)',
-  medianMsPer1000: time(50, () => {
-    for (let index = 0; index < 1000; index += 1) {
-      beamIlluminanceLx({
-        mount,
-        axis: vec3(0, 6, -5.3),
-        peakCd: 30000,
-        spread,
-        point: vec3(index * 0.001, 3, 1.6),
-        normal: vec3(0, 0, 1),
-      });
-    }
-  }),
-});
-print({
-  name: 'peak candela from lumens (one zoom step, memoised after the first)',
-  medianMs: time(200, () => peakCandelaFromLumens(12000, 19, 30)),
-});
-print({
-  name: 'footprint on the focus plane (closed form + 96-point outline)',
-  medianMs: time(500, () => footprintOnPlane(mount, vec3(0, 3, 1.6), 26, 1.6)),
-});
-print({
-  name: 'soft box 1.2 m from a face, numerical area integral',
-  medianMs: time(50, () =>
-    areaSourceIlluminanceLx({
-      shape: { kind: 'rectangle', widthM: 0.9, heightM: 1.2 },
-      centre: vec3(1, -1, 1.7),
-      facing: vec3(-1, 1, 0),
-      luminanceCdPerM2: 4000,
-      point: vec3(0, 0, 1.6),
-      normal: vec3(0, -1, 0),
+function coreBenchmarks(): void {
+  const mount = vec3(0, -3, 7);
+  const spread = { kind: 'round', beamAngleDeg: 26, fieldAngleDeg: 40 } as const;
+  print({
+    name: 'point-source beam at one point (exact profile)',
+    medianMsPer1000: time(50, () => {
+      for (let index = 0; index < 1000; index += 1) {
+        beamIlluminanceLx({
+          mount,
+          axis: vec3(0, 6, -5.3),
+          peakCd: 30000,
+          spread,
+          point: vec3(index * 0.001, 3, 1.6),
+          normal: vec3(0, 0, 1),
+        });
+      }
     }),
-  ),
-});
+  });
+  print({
+    name: 'peak candela from lumens (one zoom step, memoised after the first)',
+    medianMs: time(200, () => peakCandelaFromLumens(12000, 19, 30)),
+  });
+  print({
+    name: 'footprint on the focus plane (closed form + 96-point outline)',
+    medianMs: time(500, () => footprintOnPlane(mount, vec3(0, 3, 1.6), 26, 1.6)),
+  });
+  print({
+    name: 'soft box 1.2 m from a face, numerical area integral',
+    medianMs: time(50, () =>
+      areaSourceIlluminanceLx({
+        shape: { kind: 'rectangle', widthM: 0.9, heightM: 1.2 },
+        centre: vec3(1, -1, 1.7),
+        facing: vec3(-1, 1, 0),
+        luminanceCdPerM2: 4000,
+        point: vec3(0, 0, 1.6),
+        normal: vec3(0, -1, 0),
+      }),
+    ),
+  });
+}
+
+void (async () => {
+  await coverageBenchmarks();
+  demoBenchmarks();
+  coreBenchmarks();
+})();

@@ -114,9 +114,10 @@ export function CoveragePanel({ settings, onSettingsChange, status, map, onShowR
                 ))}
               </tbody>
             </table>
-            <p className="panel-note">
+            <p className="panel-note" data-testid="coverage-timing" data-threads={map.threads}>
               {map.spec.grid.columns * map.spec.grid.rows} cells of {formatLength(map.spec.grid.spacingM, units)};
-              computed in {map.elapsedMs.toFixed(0)} ms ({map.recomputed} unit{map.recomputed === 1 ? '' : 's'} recomputed).
+              computed in {map.elapsedMs.toFixed(0)} ms{map.threads > 1 ? ` on ${map.threads} threads` : ''} ({map.recomputed} unit
+              {map.recomputed === 1 ? '' : 's'} recomputed).
             </p>
           </PanelSection>
           <PanelSection title="Hot spots and dark gaps">

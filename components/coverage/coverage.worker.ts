@@ -1,14 +1,28 @@
 /// <reference lib="webworker" />
-// The light-map engine off the main thread: the same pure service the report and tests use.
-import { type CoverageRequest, createCoverageService } from '@/lib/analysis';
+// The light-map engine off the main thread: the same pure service the report and tests use. The page
+// may first send ports to helper workers; full recomputes are then shared with them (sharing.ts).
+import {
+  type CoverageRequest,
+  type CoverageResponse,
+  createCoverageService,
+  createSharedCoverageService,
+  shareHelperOverPort,
+} from '@/lib/analysis';
 
-const service = createCoverageService();
+type Incoming = { helpers: MessagePort[] } | { sequence: number; request: CoverageRequest };
 
-self.onmessage = (event: MessageEvent<{ sequence: number; request: CoverageRequest }>) => {
+let handle: (request: CoverageRequest) => CoverageResponse | Promise<CoverageResponse> = createCoverageService().handle;
+
+self.onmessage = async (event: MessageEvent<Incoming>) => {
+  const data = event.data;
+  if ('helpers' in data) {
+    handle = createSharedCoverageService(data.helpers.map(shareHelperOverPort)).handle;
+    return;
+  }
   try {
-    const response = service.handle(event.data.request);
-    (self as unknown as Worker).postMessage({ sequence: event.data.sequence, response }, [response.values.buffer]);
+    const response = await handle(data.request);
+    (self as unknown as Worker).postMessage({ sequence: data.sequence, response }, [response.values.buffer]);
   } catch (error) {
-    (self as unknown as Worker).postMessage({ sequence: event.data.sequence, error: (error as Error).message });
+    (self as unknown as Worker).postMessage({ sequence: data.sequence, error: (error as Error).message });
   }
 };

@@ -6,6 +6,15 @@ import { type CoverageRequest, type CoverageResponse, createCoverageService } fr
 export type CoverageStatus = { state: 'idle' } | { state: 'working' } | { state: 'ready'; response: CoverageResponse } | { state: 'error'; message: string };
 
 /**
+ * Helper workers to start: one per core beyond the first, at most three. While a full recompute runs
+ * the page's own thread is mostly idle, so the light-map worker and its helpers have the cores.
+ */
+function helperCount(): number {
+  const cores = typeof navigator === 'undefined' ? 1 : navigator.hardwareConcurrency || 1;
+  return Math.min(3, Math.max(0, cores - 1));
+}
+
+/**
  * Runs coverage requests in a Web Worker, one at a time: while one is being computed only the newest
  * request waits, so a drag never queues up stale work. Falls back to the main thread where Workers
  * are missing.
@@ -22,6 +31,17 @@ export function useCoverage(request: CoverageRequest | string | null): { status:
     if (typeof Worker === 'undefined') return;
     const instance = new Worker(new URL('./coverage.worker.ts', import.meta.url));
     worker.current = instance;
+    // Helpers for full recomputes, one per further core (at most three), each joined to the worker by a
+    // channel of its own.
+    const helpers = Array.from({ length: helperCount() }, () => new Worker(new URL('./coverageShare.worker.ts', import.meta.url)));
+    if (helpers.length > 0) {
+      const ports = helpers.map((helper) => {
+        const channel = new MessageChannel();
+        helper.postMessage({ port: channel.port2 }, [channel.port2]);
+        return channel.port1;
+      });
+      instance.postMessage({ helpers: ports }, ports);
+    }
     instance.onmessage = (event: MessageEvent<{ sequence: number; response?: CoverageResponse; error?: string }>) => {
       busy.current = false;
       if (event.data.response) {
@@ -39,6 +59,7 @@ export function useCoverage(request: CoverageRequest | string | null): { status:
     };
     return () => {
       instance.terminate();
+      for (const helper of helpers) helper.terminate();
       worker.current = null;
     };
   }, []);

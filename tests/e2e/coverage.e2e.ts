@@ -7,15 +7,17 @@ import { createPlotDeriver, loadPlotValue } from '@/lib/plot';
 import { DEFAULT_COVERAGE, coverageRequest } from '@/components/coverage/coverageSettings';
 import { artifactsDir, recordPageProblems, browserForThisFile } from './support/browser';
 import { createShowFromDemo, readDemo, showUrl } from './support/shows';
+import { seededRandom } from '@/lib/seededRandom';
 
 const browser = browserForThisFile();
 
 /** The same light map computed here, in Node, on the main thread: what the browser's worker must match. */
-function expectedStatistics(document: unknown) {
+function expectedStatistics(document: unknown, settings: Partial<typeof DEFAULT_COVERAGE> = {}) {
   const loaded = loadPlotValue(document);
   if (!loaded.ok) throw new Error(loaded.errors.join('\n'));
   const request = coverageRequest(loaded.document, createPlotDeriver()(loaded.document), {
     ...DEFAULT_COVERAGE,
+    ...settings,
     visible: true,
   });
   if (typeof request === 'string') throw new Error(request);
@@ -87,6 +89,61 @@ describe('the light map of the demo conference stage', () => {
 
     await mkdir(artifactsDir, { recursive: true });
     await page.screenshot({ path: path.join(artifactsDir, 'light-map.png') });
+    expect(problems.pageErrors).toEqual([]);
+    expect(problems.consoleErrors).toEqual([]);
+    await page.close();
+  });
+});
+
+describe('a large rig', () => {
+  it('computes its light map on the helper workers too, with the same figures as one thread in Node', async () => {
+    // An invented rig: the conference demo's 21 units copied to 252, their focus points scattered.
+    const demo = readDemo('conference.json');
+    const next = seededRandom(42);
+    const original = demo.fixtures as { id: string; focus: { x: number; y: number; z: number } }[];
+    demo.fixtures = Array.from({ length: 12 * original.length }, (_, index) => {
+      const fixture = original[index % original.length];
+      return {
+        ...fixture,
+        id: `${fixture.id}-copy-${index}`,
+        focus: {
+          ...fixture.focus,
+          x: fixture.focus.x + (next() - 0.5) * 3,
+          y: fixture.focus.y + (next() - 0.5) * 2,
+        },
+      };
+    });
+    demo.levelSets = [];
+    demo.activeLevelSetId = null;
+    const response = await fetch(new URL('/api/shows', inject('baseUrl')), {
+      method: 'POST',
+      headers: { 'Content-Type': 'application/json' },
+      body: JSON.stringify({ document: demo, origin: 'file' }),
+    });
+    expect(response.status).toBe(201);
+    const { show } = (await response.json()) as { show: { id: string } };
+
+    const page = await browser().newPage({ viewport: { width: 1440, height: 900 } });
+    const problems = recordPageProblems(page);
+    await page.goto(showUrl(inject('baseUrl'), show.id), { waitUntil: 'load' });
+    await page.getByTestId('plan-canvas').locator('canvas').first().waitFor({ state: 'visible' });
+    await page.getByRole('tab', { name: 'Light map' }).click();
+    await page.getByLabel('Show the light map on the plan').check();
+    const timing = page.getByTestId('coverage-timing');
+    await timing.waitFor();
+    // Faces turned to the main viewpoint: a new grid, so every unit is computed again, and a 252-unit rig
+    // is shared out with one helper per core beyond the first, at most three (useCoverage.ts).
+    await page.getByLabel('Surface').selectOption('toward');
+    const cores = await page.evaluate(() => navigator.hardwareConcurrency || 1);
+    await expect
+      .poll(async () => Number(await timing.getAttribute('data-threads')), { timeout: 15000 })
+      .toBe(Math.min(4, Math.max(1, cores)));
+    expect(await timing.textContent()).toContain('252 units recomputed');
+    const expected = expectedStatistics(demo, { plane: 'toward' });
+    const shown = await shownAverages(page);
+    for (const row of expected)
+      expect(shown.get(row.id)).toBeCloseTo(row.figures?.averageLx ?? Number.NaN, 6);
+    await page.screenshot({ path: path.join(artifactsDir, 'light-map-large-rig.png') });
     expect(problems.pageErrors).toEqual([]);
     expect(problems.consoleErrors).toEqual([]);
     await page.close();

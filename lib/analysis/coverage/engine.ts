@@ -4,7 +4,8 @@
  * only the cells inside its beam are visited. Results are typed arrays.
  */
 import type { RigFixture } from '../rig';
-import { type CoverageSpec, cellCount } from './grid';
+import { type CoverageSpec, EVERY_ROW, type RowShare, cellCount } from './grid';
+import { type ShareHelper, copyShareRows, fitsGrid } from './sharing';
 import { type AccumulateTarget, type CellNormals, type PreparedSource, accumulateSource, cellNormals, prepareSource } from './kernel';
 
 export interface CoverageGrid extends AccumulateTarget {
@@ -15,12 +16,31 @@ export interface CoverageGrid extends AccumulateTarget {
   readonly overlaps: Uint16Array;
 }
 
+/** A full recompute is shared out when it takes at least this long on one thread (ms). */
+export const SHARE_FROM_MS = 4;
+/** Before any full recompute has been timed, rigs of this many units or more are shared out. */
+export const SHARE_FROM_UNITS = 100;
+
 export interface CoverageEngine {
   readonly spec: CoverageSpec;
-  /** Bring the grid up to date with `fixtures`; returns the engine's own arrays (copy before keeping). */
-  update(fixtures: readonly RigFixture[]): CoverageGrid;
+  /**
+   * Bring the grid up to date with `fixtures`; returns the engine's own arrays (copy before keeping).
+   * `restart` computes every fixture again instead of only the changed ones.
+   */
+  update(fixtures: readonly RigFixture[], options?: { readonly restart?: boolean }): CoverageGrid;
+  /**
+   * The same, but when every fixture is to be computed again the grid's rows are shared out with
+   * `helpers` (other threads; sharing.ts), each computing its rows while this thread does its own. The
+   * grid is the same to the last bit: every cell is still summed over the same fixtures in the same
+   * order. Small changes, and full recomputes that took less than `shareFromMs` (default SHARE_FROM_MS)
+   * on one thread last time, are done here alone: messages would cost more than they save. Before the
+   * first full recompute, rigs of SHARE_FROM_UNITS units or more are shared. One update at a time.
+   */
+  updateSharing(fixtures: readonly RigFixture[], helpers: readonly ShareHelper[], options?: { readonly shareFromMs?: number }): Promise<CoverageGrid>;
   /** How many fixtures the last update had to (re)compute. */
   lastRecomputed(): number;
+  /** How many threads computed the last update (1, or 1 + helpers when it was shared out). */
+  lastThreads(): number;
 }
 
 /**
@@ -51,8 +71,11 @@ interface Entry {
   readonly prepared: PreparedSource;
 }
 
-/** A fresh engine for one grid and plane. */
-export function createCoverageEngine(spec: CoverageSpec): CoverageEngine {
+/**
+ * A fresh engine for one grid and plane. With a `share`, it computes only those rows (the others stay
+ * 0): parts of one grid computed on different threads (sharedEngine.ts) are put together row by row.
+ */
+export function createCoverageEngine(spec: CoverageSpec, share: RowShare = EVERY_ROW): CoverageEngine {
   const normals: CellNormals = cellNormals(spec);
   const grid: CoverageGrid = {
     spec,
@@ -63,41 +86,97 @@ export function createCoverageEngine(spec: CoverageSpec): CoverageEngine {
   // otherwise it is compared field by field with the last one.
   let current = new Map<string, Entry>();
   let recomputed = 0;
+  let threads = 1;
+  let sharing = false;
+  // How long the last full recompute took, or would have taken, on one thread (ms); null before the first.
+  let fullMs: number | null = null;
+
+  /** The entries for `fixtures` and the changes since the last update (prepared sources to take away and add). */
+  const plan = (fixtures: readonly RigFixture[]) => {
+    if (sharing) throw new Error('the light map engine was asked for a new grid before the last one was put together');
+    const next = new Map<string, Entry>();
+    const changes: { before?: PreparedSource; after?: PreparedSource }[] = [];
+    for (const fixture of fixtures) {
+      const previous = current.get(fixture.id);
+      if (previous && (previous.fixture === fixture || samePlainData(previous.fixture, fixture))) {
+        next.set(fixture.id, previous.fixture === fixture ? previous : { fixture, prepared: previous.prepared });
+        continue;
+      }
+      const prepared = prepareSource(fixture, spec);
+      next.set(fixture.id, { fixture, prepared });
+      changes.push({ before: previous?.prepared, after: prepared });
+    }
+    for (const [id, previous] of current) {
+      if (!next.has(id)) changes.push({ before: previous.prepared });
+    }
+    // Past half the rig, starting again is as quick and sheds any rounding left by subtraction.
+    return { next, changes, restart: changes.length > fixtures.length / 2 };
+  };
+
+  const restart = (next: Map<string, Entry>, rows: RowShare) => {
+    const started = performance.now();
+    grid.values.fill(0);
+    grid.overlaps.fill(0);
+    for (const entry of next.values()) accumulateSource(entry.prepared, spec, normals, grid, 1, rows);
+    if (rows.every === 1) fullMs = performance.now() - started;
+  };
+
+  const incremental = (changes: readonly { before?: PreparedSource; after?: PreparedSource }[]) => {
+    for (const change of changes) {
+      if (change.before) accumulateSource(change.before, spec, normals, grid, -1, share);
+      if (change.after) accumulateSource(change.after, spec, normals, grid, 1, share);
+    }
+  };
 
   return {
     spec,
-    update(fixtures) {
-      const next = new Map<string, Entry>();
-      const changes: { before?: PreparedSource; after?: PreparedSource }[] = [];
-      for (const fixture of fixtures) {
-        const previous = current.get(fixture.id);
-        if (previous && (previous.fixture === fixture || samePlainData(previous.fixture, fixture))) {
-          next.set(fixture.id, previous.fixture === fixture ? previous : { fixture, prepared: previous.prepared });
-          continue;
-        }
-        const prepared = prepareSource(fixture, spec);
-        next.set(fixture.id, { fixture, prepared });
-        changes.push({ before: previous?.prepared, after: prepared });
+    update(fixtures, options) {
+      const { next, changes, restart: startAgain } = plan(fixtures);
+      if (startAgain || options?.restart) restart(next, share);
+      else incremental(changes);
+      recomputed = startAgain || options?.restart ? next.size : changes.length;
+      threads = 1;
+      current = next;
+      return grid;
+    },
+    async updateSharing(fixtures, helpers, options) {
+      const { next, changes, restart: startAgain } = plan(fixtures);
+      const expectedMs = fullMs ?? (next.size >= SHARE_FROM_UNITS ? Infinity : 0);
+      const worthSharing = expectedMs >= (options?.shareFromMs ?? SHARE_FROM_MS);
+      if (!startAgain || helpers.length === 0 || share.every !== 1 || !worthSharing) {
+        if (startAgain) restart(next, share);
+        else incremental(changes);
+        recomputed = startAgain ? next.size : changes.length;
+        threads = 1;
+        current = next;
+        return grid;
       }
-      for (const [id, previous] of current) {
-        if (!next.has(id)) changes.push({ before: previous.prepared });
+      // Rows dealt out in turn: part 0 here, part k to helper k, asked first so that they work meanwhile.
+      const every = helpers.length + 1;
+      const shareOf = (index: number): RowShare => ({ every, from: index + 1 });
+      const parts = helpers.map((helper, index) => helper({ spec, share: shareOf(index), fixtures }));
+      for (const part of parts) part.catch(() => undefined);
+      sharing = true;
+      try {
+        const started = performance.now();
+        restart(next, { every, from: 0 });
+        const ownMs = performance.now() - started;
+        const answers = await Promise.allSettled(parts);
+        answers.forEach((answer, index) => {
+          if (answer.status === 'fulfilled' && fitsGrid(answer.value, grid)) copyShareRows(answer.value, grid, shareOf(index));
+          // A helper that failed (a worker gone, say) costs time, never the map: its rows are done here.
+          else for (const entry of next.values()) accumulateSource(entry.prepared, spec, normals, grid, 1, shareOf(index));
+        });
+        fullMs = ownMs * every;
+      } finally {
+        sharing = false;
       }
-      // Past half the rig, starting again is as quick and sheds any rounding left by subtraction.
-      if (changes.length > fixtures.length / 2) {
-        grid.values.fill(0);
-        grid.overlaps.fill(0);
-        for (const entry of next.values()) accumulateSource(entry.prepared, spec, normals, grid, 1);
-        recomputed = next.size;
-      } else {
-        for (const change of changes) {
-          if (change.before) accumulateSource(change.before, spec, normals, grid, -1);
-          if (change.after) accumulateSource(change.after, spec, normals, grid, 1);
-        }
-        recomputed = changes.length;
-      }
+      recomputed = next.size;
+      threads = every;
       current = next;
       return grid;
     },
     lastRecomputed: () => recomputed,
+    lastThreads: () => threads,
   };
 }

@@ -23,6 +23,26 @@ export interface CoverageSpec {
   readonly plane: CoveragePlane;
 }
 
+/**
+ * Which rows of a grid one part of a computation takes: rows r with r mod every = from. The rows are
+ * dealt out in turn, so parts sharing a grid get about the same work wherever the beams fall.
+ */
+export interface RowShare {
+  readonly every: number;
+  readonly from: number;
+}
+
+export const EVERY_ROW: RowShare = { every: 1, from: 0 };
+
+/**
+ * The first row at or after `row` that belongs to `share`. Kept to small integers (`| 0`): a −0 from
+ * `%` would make the optimiser carry the kernel's row numbers as doubles, which slows its loops.
+ */
+export function firstRowOfShare(row: number, share: RowShare): number {
+  const offset = ((share.from - row) % share.every) | 0;
+  return (row + (offset < 0 ? offset + share.every : offset)) | 0;
+}
+
 /** Most cells a grid may have (a 0.02 m grid over 20 m × 12 m, with room to spare). */
 export const MAX_GRID_CELLS = 1_000_000;
 

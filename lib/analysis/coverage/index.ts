@@ -8,3 +8,5 @@ export * from './statistics';
 export * from './regions';
 export * from './isolux';
 export * from './service';
+export * from './sharing';
+export * from './sharePorts';

@@ -13,7 +13,7 @@ import { areaSourceIlluminanceLx, largestDimensionM, PHOTOMETRIC_DISTANCE_FACTOR
 import { profileEdgeAngleRad, spreadHalfAnglesAt } from '../../photometry/beam';
 import { fixtureIlluminanceLx, hasNoAim } from '../fixtureLight';
 import type { RigFixture } from '../rig';
-import { type CoverageSpec, cellCentreX, cellCentreY } from './grid';
+import { type CoverageSpec, EVERY_ROW, type RowShare, cellCentreX, cellCentreY, firstRowOfShare } from './grid';
 import { type ProfileTable, profileTable } from './profileTable';
 import { accumulateRound } from './roundKernel';
 
@@ -137,12 +137,19 @@ export interface AccumulateTarget {
   readonly overlaps: Uint16Array;
 }
 
-/** Add (sign +1) or take away (sign −1) one prepared source's light on every cell it reaches. */
-export function accumulateSource(prepared: PreparedSource, spec: CoverageSpec, normals: CellNormals, target: AccumulateTarget, sign: 1 | -1): void {
+/** Add (sign +1) or take away (sign −1) one prepared source's light on every cell it reaches in `share`'s rows. */
+export function accumulateSource(
+  prepared: PreparedSource,
+  spec: CoverageSpec,
+  normals: CellNormals,
+  target: AccumulateTarget,
+  sign: 1 | -1,
+  share: RowShare = EVERY_ROW,
+): void {
   const range = prepared.range;
   if (!range) return;
-  if (prepared.kind === 'round') accumulateRound(prepared, spec, normals, target, sign);
-  else accumulateCellwise(prepared.fixture, spec, normals, target, sign, range);
+  if (prepared.kind === 'round') accumulateRound(prepared, spec, normals, target, sign, share);
+  else accumulateCellwise(prepared.fixture, spec, normals, target, sign, range, share);
 }
 
 function accumulateCellwise(
@@ -152,10 +159,11 @@ function accumulateCellwise(
   target: AccumulateTarget,
   sign: 1 | -1,
   range: CellRange,
+  share: RowShare,
 ): void {
   const { grid, plane } = spec;
   const up = vec3(0, 0, 1);
-  for (let row = range.firstRow; row <= range.lastRow; row += 1) {
+  for (let row = firstRowOfShare(range.firstRow, share); row <= range.lastRow; row += share.every) {
     for (let column = range.firstColumn; column <= range.lastColumn; column += 1) {
       const index = row * grid.columns + column;
       const point = vec3(cellCentreX(grid, column), cellCentreY(grid, row), plane.heightM);

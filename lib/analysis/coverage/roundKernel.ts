@@ -8,7 +8,7 @@
  * by row interval); vertical faces and fixtures at or below the plane take the general loop.
  */
 import type { Vec3 } from '../../geometry/vector';
-import type { CoverageSpec } from './grid';
+import { type CoverageSpec, EVERY_ROW, type RowShare, firstRowOfShare } from './grid';
 import { type ProfileTable, exactTableProfile, nearAxisProfile } from './profileTable';
 
 export interface RoundBeam {
@@ -132,8 +132,15 @@ export function tablePolynomial(coefficients: Float64Array, position: number): n
   return coefficients[base] + u * coefficients[base + 1] + u2 * (coefficients[base + 2] + u * coefficients[base + 3] + u2 * (coefficients[base + 4] + u * coefficients[base + 5]));
 }
 
-/** Add (sign +1) or take away (sign −1) one round beam's light on the cells it reaches. */
-export function accumulateRound(beam: RoundBeam, spec: CoverageSpec, normals: RoundNormals, target: RoundTarget, sign: 1 | -1): void {
+/** Add (sign +1) or take away (sign −1) one round beam's light on the cells it reaches, in `share`'s rows. */
+export function accumulateRound(
+  beam: RoundBeam,
+  spec: CoverageSpec,
+  normals: RoundNormals,
+  target: RoundTarget,
+  sign: 1 | -1,
+  share: RowShare = EVERY_ROW,
+): void {
   const { grid } = spec;
   const { mount, axis, table } = beam;
   const dz = spec.plane.heightM - mount.z;
@@ -155,7 +162,7 @@ export function accumulateRound(beam: RoundBeam, spec: CoverageSpec, normals: Ro
   // For a horizontal plane lit from above, cos i / d² = −dz / d³ on every cell.
   const scaled = sign * beam.peakCd * (fromAbove ? -dz : 1);
   const rows = rowRange(axis, cosEdge, dz, mount.y, spec);
-  for (let row = rows.first; row <= rows.last; row += 1) {
+  for (let row = firstRowOfShare(rows.first, share); row <= rows.last; row += share.every) {
     const dy = grid.minY + (row + 0.5) * spacing - mount.y;
     // Visit only the cells of this row inside the beam's edge (one cell of margin for rounding).
     if (!rowInterval(axis, cosEdge, dy, dz, interval)) continue;

@@ -4,10 +4,11 @@
  * The browser runs it in a Web Worker; Node runs the same code for tests, the report and benchmarks.
  */
 import type { RigFixture } from '../rig';
-import { type CoverageEngine, createCoverageEngine } from './engine';
+import { type CoverageEngine, type CoverageGrid, createCoverageEngine } from './engine';
 import { type CoverageSpec, polygonMask } from './grid';
 import { type IsoluxLine, isoluxLines, niceLevels } from './isolux';
 import { type LightRegion, type RegionRules, findRegions } from './regions';
+import type { ShareHelper } from './sharing';
 import { type AreaStatistics, type TargetBand, areaStatistics } from './statistics';
 
 export interface CoverageArea {
@@ -36,6 +37,8 @@ export interface CoverageResponse {
   readonly maxLx: number;
   /** Fixtures the engine recomputed for this answer. */
   readonly recomputed: number;
+  /** Threads that computed the grid for this answer (more than 1 when a full recompute was shared out). */
+  readonly threads: number;
   readonly elapsedMs: number;
 }
 
@@ -43,11 +46,62 @@ export interface CoverageService {
   handle(request: CoverageRequest): CoverageResponse;
 }
 
+export interface SharedCoverageService {
+  handle(request: CoverageRequest): Promise<CoverageResponse>;
+}
+
+/** Statistics, hot spots and dark gaps, and isolux lines of a computed grid, with masks kept per outline. */
+function createDescriber() {
+  let masks = new Map<string, Uint8Array>();
+  let masksFor = '';
+  return (request: CoverageRequest, grid: CoverageGrid): Omit<CoverageResponse, 'recomputed' | 'threads' | 'elapsedMs'> => {
+    const gridKey = JSON.stringify(request.spec.grid);
+    if (gridKey !== masksFor) {
+      masks = new Map();
+      masksFor = gridKey;
+    }
+    const maskOf = (area: CoverageArea) => {
+      const areaKey = JSON.stringify(area.outline);
+      let mask = masks.get(areaKey);
+      if (!mask) {
+        mask = polygonMask(request.spec.grid, area.outline);
+        masks.set(areaKey, mask);
+      }
+      return mask;
+    };
+    const statistics = [request.stage, ...request.areas].map((area) => ({
+      id: area.id,
+      name: area.name,
+      figures: areaStatistics(grid.values, maskOf(area), request.band),
+    }));
+    let searchMask = maskOf(request.stage);
+    if (request.areas.length > 0) {
+      searchMask = new Uint8Array(grid.values.length);
+      for (const area of request.areas) {
+        const mask = maskOf(area);
+        for (let index = 0; index < mask.length; index += 1) if (mask[index]) searchMask[index] = 1;
+      }
+    }
+    const regions = findRegions({
+      spec: request.spec,
+      values: grid.values,
+      overlaps: grid.overlaps,
+      mask: searchMask,
+      rules: { ...request.rules, targetLx: request.band.targetLx },
+      fixtures: request.fixtures,
+    });
+    let maxLx = 0;
+    for (const value of grid.values) if (value > maxLx) maxLx = value;
+    const isolux = isoluxLines(request.spec.grid, grid.values, niceLevels(request.band.targetLx / 8, maxLx));
+    return { spec: request.spec, values: Float64Array.from(grid.values), statistics, regions, isolux, maxLx };
+  };
+}
+
 /** A service that keeps its engine (and so its incremental state) while the grid and plane stay the same. */
 export function createCoverageService(now: () => number = () => performance.now()): CoverageService {
   let engine: CoverageEngine | null = null;
   let engineKey = '';
-  let masks = new Map<string, Uint8Array>();
+  const describe = createDescriber();
   return {
     handle(request) {
       const started = now();
@@ -55,52 +109,41 @@ export function createCoverageService(now: () => number = () => performance.now(
       if (!engine || key !== engineKey) {
         engine = createCoverageEngine(request.spec);
         engineKey = key;
-        masks = new Map();
       }
       const grid = engine.update(request.fixtures);
-      const maskOf = (area: CoverageArea) => {
-        const areaKey = JSON.stringify(area.outline);
-        let mask = masks.get(areaKey);
-        if (!mask) {
-          mask = polygonMask(request.spec.grid, area.outline);
-          masks.set(areaKey, mask);
-        }
-        return mask;
-      };
-      const statistics = [request.stage, ...request.areas].map((area) => ({
-        id: area.id,
-        name: area.name,
-        figures: areaStatistics(grid.values, maskOf(area), request.band),
-      }));
-      let searchMask = maskOf(request.stage);
-      if (request.areas.length > 0) {
-        searchMask = new Uint8Array(grid.values.length);
-        for (const area of request.areas) {
-          const mask = maskOf(area);
-          for (let index = 0; index < mask.length; index += 1) if (mask[index]) searchMask[index] = 1;
-        }
-      }
-      const regions = findRegions({
-        spec: request.spec,
-        values: grid.values,
-        overlaps: grid.overlaps,
-        mask: searchMask,
-        rules: { ...request.rules, targetLx: request.band.targetLx },
-        fixtures: request.fixtures,
-      });
-      let maxLx = 0;
-      for (const value of grid.values) if (value > maxLx) maxLx = value;
-      const isolux = isoluxLines(request.spec.grid, grid.values, niceLevels(request.band.targetLx / 8, maxLx));
-      return {
-        spec: request.spec,
-        values: Float64Array.from(grid.values),
-        statistics,
-        regions,
-        isolux,
-        maxLx,
-        recomputed: engine.lastRecomputed(),
-        elapsedMs: now() - started,
-      };
+      return { ...describe(request, grid), recomputed: engine.lastRecomputed(), threads: engine.lastThreads(), elapsedMs: now() - started };
+    },
+  };
+}
+
+/**
+ * The same service, sharing full recomputes with `helpers` on other threads (engine.ts,
+ * updateSharing); the answers are the same to the last bit. Requests are answered one at a time, in order.
+ */
+export function createSharedCoverageService(
+  helpers: readonly ShareHelper[],
+  options: { readonly now?: () => number; readonly shareFromMs?: number } = {},
+): SharedCoverageService {
+  const now = options.now ?? (() => performance.now());
+  let engine: CoverageEngine | null = null;
+  let engineKey = '';
+  const describe = createDescriber();
+  let queue: Promise<unknown> = Promise.resolve();
+  const run = async (request: CoverageRequest): Promise<CoverageResponse> => {
+    const started = now();
+    const key = JSON.stringify(request.spec);
+    if (!engine || key !== engineKey) {
+      engine = createCoverageEngine(request.spec);
+      engineKey = key;
+    }
+    const grid = await engine.updateSharing(request.fixtures, helpers, { shareFromMs: options.shareFromMs });
+    return { ...describe(request, grid), recomputed: engine.lastRecomputed(), threads: engine.lastThreads(), elapsedMs: now() - started };
+  };
+  return {
+    handle(request) {
+      const next = queue.then(() => run(request));
+      queue = next.catch(() => undefined);
+      return next;
     },
   };
 }
