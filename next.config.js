@@ -3,14 +3,16 @@ const PHASE_DEVELOPMENT_SERVER = 'phase-development-server';
 
 /**
  * Security headers on every response. Next's own inline scripts and styles need 'unsafe-inline'
- * (no nonces here); the development server also needs 'unsafe-eval'. Plot names and notes are only
+ * (no nonces here); the development server also needs 'unsafe-eval'. 'wasm-unsafe-eval' lets the
+ * light-map workers compile their WebAssembly loop (it allows WebAssembly only, not eval of script;
+ * without it they fall back to the JavaScript loop). Plot names and notes are only
  * ever rendered as text, so the policy is a second line of defence, not the first.
  */
 function securityHeaders(phase) {
   const development = phase === PHASE_DEVELOPMENT_SERVER;
   const contentSecurityPolicy = [
     "default-src 'self'",
-    `script-src 'self' 'unsafe-inline'${development ? " 'unsafe-eval'" : ''}`,
+    `script-src 'self' 'unsafe-inline' 'wasm-unsafe-eval'${development ? " 'unsafe-eval'" : ''}`,
     "style-src 'self' 'unsafe-inline'",
     "img-src 'self' blob: data:",
     "font-src 'self'",

@@ -6,6 +6,7 @@
 import {
   type CoverageSpec,
   type RigFixture,
+  SHARE_FROM_MS,
   type ShareHelper,
   type SharePort,
   bruteForceCoverage,
@@ -64,27 +65,21 @@ function time(runs: number, work: () => unknown): number {
   return measure(runs, work).wallMs;
 }
 
-/** Median wall-clock times of two pieces of work measured in turn (A, B, A, B, …), so both meet the same noise. */
-async function measurePair(
-  runs: number,
-  first: () => unknown,
-  second: () => Promise<unknown>,
-): Promise<{ firstMs: number; secondMs: number }> {
-  for (let run = 0; run < 3; run += 1) {
-    first();
-    await second();
-  }
-  const a: number[] = [];
-  const b: number[] = [];
+/**
+ * Median wall-clock times of several pieces of work measured in turn (A, B, C, A, B, C, …), so that
+ * all of them meet the same noise.
+ */
+async function measureInTurn(runs: number, works: readonly (() => unknown)[]): Promise<number[]> {
+  for (let run = 0; run < 3; run += 1) for (const work of works) await work();
+  const times = works.map(() => [] as number[]);
   for (let run = 0; run < runs; run += 1) {
-    let start = performance.now();
-    first();
-    a.push(performance.now() - start);
-    start = performance.now();
-    await second();
-    b.push(performance.now() - start);
+    for (const [index, work] of works.entries()) {
+      const start = performance.now();
+      await work();
+      times[index].push(performance.now() - start);
+    }
   }
-  return { firstMs: round3(median(a)), secondMs: round3(median(b)) };
+  return times.map((list) => round3(median(list)));
 }
 
 /**
@@ -248,22 +243,37 @@ async function coverageBenchmarks(): Promise<void> {
     // measured in turn with the one-thread engine so that both meet the same noise.
     const threads = sharing.helpers.length + 1;
     const oneThread = createCoverageEngine(spec);
+    const scalar = createCoverageEngine(spec, { simd: false });
     const shared = createCoverageEngine(spec);
-    let oneFlip = false;
-    let sharedFlip = false;
-    const pair = await measurePair(
-      count >= 1000 ? 11 : 31,
+    const flips = { one: false, scalar: false, shared: false };
+    const [oneThreadMs, scalarMs, sharedMs] = await measureInTurn(count >= 1000 ? 11 : 31, [
       () => {
-        oneFlip = !oneFlip;
-        oneThread.update(oneFlip ? nudged : fixtures);
+        flips.one = !flips.one;
+        oneThread.update(flips.one ? nudged : fixtures);
+      },
+      () => {
+        flips.scalar = !flips.scalar;
+        scalar.update(flips.scalar ? nudged : fixtures);
       },
       async () => {
-        sharedFlip = !sharedFlip;
-        await shared.updateSharing(sharedFlip ? nudged : fixtures, sharing.helpers);
+        flips.shared = !flips.shared;
+        // Shared whatever its size (the app shares only from SHARE_FROM_MS), to show what sharing costs.
+        await shared.updateSharing(flips.shared ? nudged : fixtures, sharing.helpers, { shareFromMs: 0 });
         if (shared.lastThreads() !== threads) throw new Error('the full recompute was not shared out');
       },
-    );
-    const sharedGrid = await createCoverageEngine(spec).updateSharing(fixtures, sharing.helpers);
+    ]);
+    let scalarSameToTheBit = true;
+    const scalarGrid = createCoverageEngine(spec, { simd: false }).update(fixtures);
+    for (let index = 0; index < cells; index += 1) {
+      if (
+        !Object.is(scalarGrid.values[index], culled[index]) ||
+        scalarGrid.overlaps[index] !== culledOverlaps[index]
+      )
+        scalarSameToTheBit = false;
+    }
+    const sharedGrid = await createCoverageEngine(spec).updateSharing(fixtures, sharing.helpers, {
+      shareFromMs: 0,
+    });
     let sharedSameToTheBit = true;
     for (let index = 0; index < cells; index += 1) {
       if (
@@ -333,14 +343,19 @@ async function coverageBenchmarks(): Promise<void> {
       incrementalClonedRigMedianMs: incrementalCloned.wallMs,
       incrementalSharedPathMedianMs: round3(median(sharedSteps)),
       threads,
-      fullRecomputeSharedMedianMs: pair.secondMs,
-      fullRecomputeOneThreadInTurnMedianMs: pair.firstMs,
-      sharedSpeedup: Number((pair.firstMs / pair.secondMs).toFixed(2)),
+      simd: engine.simd,
+      fullRecomputeSharedMedianMs: sharedMs,
+      fullRecomputeOneThreadInTurnMedianMs: oneThreadMs,
+      fullRecomputeJavaScriptLoopInTurnMedianMs: scalarMs,
+      simdSpeedup: Number((scalarMs / oneThreadMs).toFixed(2)),
+      sharedSpeedup: Number((oneThreadMs / sharedMs).toFixed(2)),
+      appSharesIt: oneThreadMs >= SHARE_FROM_MS,
+      javaScriptLoopSameToTheBit: scalarSameToTheBit,
       sharedSameToTheBit,
       bruteForceMedianMs: bruteForce.wallMs,
       bruteForceRuns: count <= 50 ? 3 : 1,
       speedupOverBruteForce: Number((bruteForce.wallMs / full.wallMs).toFixed(1)),
-      speedupOverBruteForceShared: Number((bruteForce.wallMs / pair.secondMs).toFixed(1)),
+      speedupOverBruteForceShared: Number((bruteForce.wallMs / sharedMs).toFixed(1)),
       leanBruteForceMedianMs: leanBrute.wallMs,
       speedupOverLeanBruteForce: Number((leanBrute.wallMs / full.wallMs).toFixed(1)),
       maxRelativeDifference: difference.max,

@@ -27,12 +27,21 @@ export function CoveragePanel({ settings, onSettingsChange, status, map, onShowR
     return null;
   };
   const imperial = units === 'imperial';
-  const names = new Map(derived.units.map((unit) => [unit.fixture.id, label(unit.fixture.positionId, unit.fixture.unit, unit.fixture.id, document)]));
+  const names = new Map(
+    derived.units.map((unit) => [
+      unit.fixture.id,
+      label(unit.fixture.positionId, unit.fixture.unit, unit.fixture.id, document),
+    ]),
+  );
   return (
     <div className="panel coverage-panel" data-testid="coverage-panel">
       <h2 className="panel-title">Light map</h2>
       <label className="coverage-toggle">
-        <input type="checkbox" checked={settings.visible} onChange={(event) => change({ visible: event.target.checked })} />
+        <input
+          type="checkbox"
+          checked={settings.visible}
+          onChange={(event) => change({ visible: event.target.checked })}
+        />
         Show the light map on the plan
       </label>
       <PanelSection title="What is measured">
@@ -74,10 +83,42 @@ export function CoveragePanel({ settings, onSettingsChange, status, map, onShowR
           decimals={imperial ? 1 : 0}
           onCommit={(value) => change({ targetLx: imperial ? footcandlesToLux(value) : value })}
         />
-        <NumberInput label="On target within" value={settings.toleranceStops} unit="stops" min={0.1} max={3} decimals={2} onCommit={(toleranceStops) => change({ toleranceStops })} />
-        <NumberInput label="Hot spot: over target by" value={settings.hotStops} unit="stops" min={0.25} max={5} decimals={2} onCommit={(hotStops) => change({ hotStops })} />
-        <NumberInput label="Dark gap: under target by" value={settings.darkStops} unit="stops" min={0.25} max={8} decimals={2} onCommit={(darkStops) => change({ darkStops })} />
-        <NumberInput label="Beams piling up: more than" value={settings.maxOverlaps} unit="beams" min={1} max={50} integer onCommit={(maxOverlaps) => change({ maxOverlaps })} />
+        <NumberInput
+          label="On target within"
+          value={settings.toleranceStops}
+          unit="stops"
+          min={0.1}
+          max={3}
+          decimals={2}
+          onCommit={(toleranceStops) => change({ toleranceStops })}
+        />
+        <NumberInput
+          label="Hot spot: over target by"
+          value={settings.hotStops}
+          unit="stops"
+          min={0.25}
+          max={5}
+          decimals={2}
+          onCommit={(hotStops) => change({ hotStops })}
+        />
+        <NumberInput
+          label="Dark gap: under target by"
+          value={settings.darkStops}
+          unit="stops"
+          min={0.25}
+          max={8}
+          decimals={2}
+          onCommit={(darkStops) => change({ darkStops })}
+        />
+        <NumberInput
+          label="Beams piling up: more than"
+          value={settings.maxOverlaps}
+          unit="beams"
+          min={1}
+          max={50}
+          integer
+          onCommit={(maxOverlaps) => change({ maxOverlaps })}
+        />
       </PanelSection>
       <Legend targetLx={settings.targetLx} units={units} />
       {status.state === 'error' ? <p className="panel-problem">{status.message}</p> : null}
@@ -91,13 +132,22 @@ export function CoveragePanel({ settings, onSettingsChange, status, map, onShowR
                   <th scope="col">Min</th>
                   <th scope="col">Average</th>
                   <th scope="col">Max</th>
-                  <th scope="col" title="E min / E average">U0</th>
-                  <th scope="col" title="Share within the target band">On target</th>
+                  <th scope="col" title="E min / E average">
+                    U0
+                  </th>
+                  <th scope="col" title="Share within the target band">
+                    On target
+                  </th>
                 </tr>
               </thead>
               <tbody>
                 {map.statistics.map((row) => (
-                  <tr key={row.id} data-area={row.id} data-average={row.figures?.averageLx ?? ''} data-min={row.figures?.minLx ?? ''}>
+                  <tr
+                    key={row.id}
+                    data-area={row.id}
+                    data-average={row.figures?.averageLx ?? ''}
+                    data-min={row.figures?.minLx ?? ''}
+                  >
                     <th scope="row">{row.name}</th>
                     {row.figures ? (
                       <>
@@ -114,9 +164,15 @@ export function CoveragePanel({ settings, onSettingsChange, status, map, onShowR
                 ))}
               </tbody>
             </table>
-            <p className="panel-note" data-testid="coverage-timing" data-threads={map.threads}>
-              {map.spec.grid.columns * map.spec.grid.rows} cells of {formatLength(map.spec.grid.spacingM, units)};
-              computed in {map.elapsedMs.toFixed(0)} ms{map.threads > 1 ? ` on ${map.threads} threads` : ''} ({map.recomputed} unit
+            <p
+              className="panel-note"
+              data-testid="coverage-timing"
+              data-threads={map.threads}
+              data-simd={map.simd}
+            >
+              {map.spec.grid.columns * map.spec.grid.rows} cells of{' '}
+              {formatLength(map.spec.grid.spacingM, units)}; computed in {map.elapsedMs.toFixed(0)} ms
+              {map.threads > 1 ? ` on ${map.threads} threads` : ''} ({map.recomputed} unit
               {map.recomputed === 1 ? '' : 's'} recomputed).
             </p>
           </PanelSection>
@@ -127,16 +183,31 @@ export function CoveragePanel({ settings, onSettingsChange, status, map, onShowR
               <ul className="coverage-regions" data-testid="coverage-regions">
                 {map.regions.slice(0, 30).map((region, index) => (
                   <li key={index}>
-                    <button type="button" className={`coverage-region coverage-region--${region.kind}`} onClick={() => onShowRegion(region)}>
-                      <strong>{region.kind === 'hot' ? (region.reason === 'beams pile up' ? 'Beams pile up' : 'Hot spot') : 'Dark gap'}</strong>{' '}
-                      {region.kind === 'hot' ? 'peaks at' : 'falls to'} {formatIlluminance(region.extremeLx, units)} at x {formatLength(region.extremeAt.x, units)}, y{' '}
-                      {formatLength(region.extremeAt.y, units)}; {region.areaM2.toFixed(region.areaM2 < 1 ? 2 : 1)} m².
+                    <button
+                      type="button"
+                      className={`coverage-region coverage-region--${region.kind}`}
+                      onClick={() => onShowRegion(region)}
+                    >
+                      <strong>
+                        {region.kind === 'hot'
+                          ? region.reason === 'beams pile up'
+                            ? 'Beams pile up'
+                            : 'Hot spot'
+                          : 'Dark gap'}
+                      </strong>{' '}
+                      {region.kind === 'hot' ? 'peaks at' : 'falls to'}{' '}
+                      {formatIlluminance(region.extremeLx, units)} at x{' '}
+                      {formatLength(region.extremeAt.x, units)}, y {formatLength(region.extremeAt.y, units)};{' '}
+                      {region.areaM2.toFixed(region.areaM2 < 1 ? 2 : 1)} m².
                       <span className="coverage-region-units">
                         {region.fixtures.length === 0
                           ? ' No unit reaches it.'
                           : ` ${region.kind === 'hot' ? 'From' : 'Reached by'} ${region.fixtures
                               .slice(0, 4)
-                              .map((entry) => `${names.get(entry.fixtureId) ?? entry.fixtureId} (${formatIlluminance(entry.lx, units)})`)
+                              .map(
+                                (entry) =>
+                                  `${names.get(entry.fixtureId) ?? entry.fixtureId} (${formatIlluminance(entry.lx, units)})`,
+                              )
                               .join(', ')}${region.fixtures.length > 4 ? '…' : ''}`}
                       </span>
                     </button>
@@ -177,7 +248,12 @@ function Legend({ targetLx, units }: { targetLx: number; units: 'metric' | 'impe
   );
 }
 
-function label(positionId: string | null, unit: number | null, id: string, document: { positions: readonly { id: string; name: string }[] }): string {
+function label(
+  positionId: string | null,
+  unit: number | null,
+  id: string,
+  document: { positions: readonly { id: string; name: string }[] },
+): string {
   const position = document.positions.find((item) => item.id === positionId);
   return position ? `${position.name} #${unit ?? '?'}` : id;
 }

@@ -11,7 +11,8 @@ import {
 
 type Incoming = { helpers: MessagePort[] } | { sequence: number; request: CoverageRequest };
 
-let handle: (request: CoverageRequest) => CoverageResponse | Promise<CoverageResponse> = createCoverageService().handle;
+let handle: (request: CoverageRequest) => CoverageResponse | Promise<CoverageResponse> =
+  createCoverageService().handle;
 
 self.onmessage = async (event: MessageEvent<Incoming>) => {
   const data = event.data;

@@ -33,28 +33,44 @@ export const DEFAULT_COVERAGE: CoverageSettings = {
 };
 
 /** The request for the coverage service: a grid over the stage outline, at the chosen plane. */
-export function coverageRequest(document: PlotDocument, derived: DerivedPlot, settings: CoverageSettings): CoverageRequest | string {
+export function coverageRequest(
+  document: PlotDocument,
+  derived: DerivedPlot,
+  settings: CoverageSettings,
+): CoverageRequest | string {
   const xs = document.stage.outline.map((point) => point.x);
   const ys = document.stage.outline.map((point) => point.y);
   const heightM = settings.heightM ?? document.focusPlaneHeightM;
   const viewpointId = settings.viewpointId ?? document.mainViewpointId;
   const viewpoint = document.viewpoints.find((view) => view.id === viewpointId)?.position ?? null;
-  if (settings.plane === 'toward' && !viewpoint) return 'Choose a viewpoint to map the light on faces turned toward it.';
+  if (settings.plane === 'toward' && !viewpoint)
+    return 'Choose a viewpoint to map the light on faces turned toward it.';
   let grid;
   try {
-    grid = gridOver({ minX: Math.min(...xs), maxX: Math.max(...xs), minY: Math.min(...ys), maxY: Math.max(...ys) }, settings.spacingM);
+    grid = gridOver(
+      { minX: Math.min(...xs), maxX: Math.max(...xs), minY: Math.min(...ys), maxY: Math.max(...ys) },
+      settings.spacingM,
+    );
   } catch (error) {
     return (error as Error).message;
   }
   return {
     spec: {
       grid,
-      plane: settings.plane === 'toward' && viewpoint ? { kind: 'toward', heightM, viewpoint } : { kind: 'horizontal', heightM },
+      plane:
+        settings.plane === 'toward' && viewpoint
+          ? { kind: 'toward', heightM, viewpoint }
+          : { kind: 'horizontal', heightM },
     },
     fixtures: derived.rig,
     stage: { id: 'stage', name: 'Whole stage', outline: document.stage.outline },
     areas: document.stage.acting.map((area) => ({ id: area.id, name: area.name, outline: area.outline })),
     band: { targetLx: settings.targetLx, toleranceStops: settings.toleranceStops },
-    rules: { hotStops: settings.hotStops, darkStops: settings.darkStops, maxOverlaps: settings.maxOverlaps, minimumAreaM2: 0.05 },
+    rules: {
+      hotStops: settings.hotStops,
+      darkStops: settings.darkStops,
+      maxOverlaps: settings.maxOverlaps,
+      minimumAreaM2: 0.05,
+    },
   };
 }

@@ -3,7 +3,11 @@
 import { useEffect, useRef, useState } from 'react';
 import { type CoverageRequest, type CoverageResponse, createCoverageService } from '@/lib/analysis';
 
-export type CoverageStatus = { state: 'idle' } | { state: 'working' } | { state: 'ready'; response: CoverageResponse } | { state: 'error'; message: string };
+export type CoverageStatus =
+  | { state: 'idle' }
+  | { state: 'working' }
+  | { state: 'ready'; response: CoverageResponse }
+  | { state: 'error'; message: string };
 
 /**
  * Helper workers to start: one per core beyond the first, at most three. While a full recompute runs
@@ -19,7 +23,10 @@ function helperCount(): number {
  * request waits, so a drag never queues up stale work. Falls back to the main thread where Workers
  * are missing.
  */
-export function useCoverage(request: CoverageRequest | string | null): { status: CoverageStatus; last: CoverageResponse | null } {
+export function useCoverage(request: CoverageRequest | string | null): {
+  status: CoverageStatus;
+  last: CoverageResponse | null;
+} {
   const [status, setStatus] = useState<CoverageStatus>({ state: 'idle' });
   const [last, setLast] = useState<CoverageResponse | null>(null);
   const worker = useRef<Worker | null>(null);
@@ -33,7 +40,10 @@ export function useCoverage(request: CoverageRequest | string | null): { status:
     worker.current = instance;
     // Helpers for full recomputes, one per further core (at most three), each joined to the worker by a
     // channel of its own.
-    const helpers = Array.from({ length: helperCount() }, () => new Worker(new URL('./coverageShare.worker.ts', import.meta.url)));
+    const helpers = Array.from(
+      { length: helperCount() },
+      () => new Worker(new URL('./coverageShare.worker.ts', import.meta.url)),
+    );
     if (helpers.length > 0) {
       const ports = helpers.map((helper) => {
         const channel = new MessageChannel();
@@ -42,12 +52,15 @@ export function useCoverage(request: CoverageRequest | string | null): { status:
       });
       instance.postMessage({ helpers: ports }, ports);
     }
-    instance.onmessage = (event: MessageEvent<{ sequence: number; response?: CoverageResponse; error?: string }>) => {
+    instance.onmessage = (
+      event: MessageEvent<{ sequence: number; response?: CoverageResponse; error?: string }>,
+    ) => {
       busy.current = false;
       if (event.data.response) {
         setLast(event.data.response);
         setStatus({ state: 'ready', response: event.data.response });
-      } else setStatus({ state: 'error', message: event.data.error ?? 'The light map could not be computed.' });
+      } else
+        setStatus({ state: 'error', message: event.data.error ?? 'The light map could not be computed.' });
       const next = waiting.current;
       waiting.current = null;
       if (next) send(next);

@@ -54,6 +54,8 @@ describe('the light map of the demo conference stage', () => {
       expect(shown.get(row.id)).toBeCloseTo(row.figures?.averageLx ?? Number.NaN, 6);
     }
     expect(await page.locator('[data-testid="coverage-regions"] li').count()).toBeGreaterThan(0);
+    // The worker compiled the WebAssembly SIMD loop (the page's content policy allows WebAssembly).
+    expect(await page.getByTestId('coverage-timing').getAttribute('data-simd')).toBe('true');
 
     // Drag the second front-truss unit's focus point (alone at x 1, y 1.5) 1.5 m stage left: the figures follow.
     const plan = page.getByTestId('plan-canvas');

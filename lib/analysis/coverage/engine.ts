@@ -5,8 +5,17 @@
  */
 import type { RigFixture } from '../rig';
 import { type CoverageSpec, EVERY_ROW, type RowShare, cellCount } from './grid';
+import type { ProfileTable } from './profileTable';
 import { type ShareHelper, copyShareRows, fitsGrid } from './sharing';
-import { type AccumulateTarget, type CellNormals, type PreparedSource, accumulateSource, cellNormals, prepareSource } from './kernel';
+import { simdRowsAvailable, withSimdRows } from './simdRows';
+import {
+  type AccumulateTarget,
+  type CellNormals,
+  type PreparedSource,
+  accumulateSource,
+  cellNormals,
+  prepareSource,
+} from './kernel';
 
 export interface CoverageGrid extends AccumulateTarget {
   readonly spec: CoverageSpec;
@@ -36,11 +45,17 @@ export interface CoverageEngine {
    * on one thread last time, are done here alone: messages would cost more than they save. Before the
    * first full recompute, rigs of SHARE_FROM_UNITS units or more are shared. One update at a time.
    */
-  updateSharing(fixtures: readonly RigFixture[], helpers: readonly ShareHelper[], options?: { readonly shareFromMs?: number }): Promise<CoverageGrid>;
+  updateSharing(
+    fixtures: readonly RigFixture[],
+    helpers: readonly ShareHelper[],
+    options?: { readonly shareFromMs?: number },
+  ): Promise<CoverageGrid>;
   /** How many fixtures the last update had to (re)compute. */
   lastRecomputed(): number;
   /** How many threads computed the last update (1, or 1 + helpers when it was shared out). */
   lastThreads(): number;
+  /** Whether full recomputes run the round beams' inner loop in WebAssembly SIMD (simdRows.ts). */
+  readonly simd: boolean;
 }
 
 /**
@@ -71,11 +86,27 @@ interface Entry {
   readonly prepared: PreparedSource;
 }
 
+export interface CoverageEngineOptions {
+  /** Only these rows (the others stay 0); all rows by default. */
+  readonly share?: RowShare;
+  /**
+   * Full recomputes on a horizontal plane run the round beams' inner loop in WebAssembly SIMD where
+   * the platform has it (simdRows.ts; the same bits as the JavaScript loop). On by default.
+   */
+  readonly simd?: boolean;
+}
+
 /**
  * A fresh engine for one grid and plane. With a `share`, it computes only those rows (the others stay
  * 0): parts of one grid computed on different threads (sharedEngine.ts) are put together row by row.
  */
-export function createCoverageEngine(spec: CoverageSpec, share: RowShare = EVERY_ROW): CoverageEngine {
+export function createCoverageEngine(
+  spec: CoverageSpec,
+  options: CoverageEngineOptions = {},
+): CoverageEngine {
+  const share = options.share ?? EVERY_ROW;
+  // The SIMD loop serves round beams lit from above: only a horizontal plane has them.
+  const simd = (options.simd ?? true) && spec.plane.kind === 'horizontal' && simdRowsAvailable();
   const normals: CellNormals = cellNormals(spec);
   const grid: CoverageGrid = {
     spec,
@@ -93,13 +124,17 @@ export function createCoverageEngine(spec: CoverageSpec, share: RowShare = EVERY
 
   /** The entries for `fixtures` and the changes since the last update (prepared sources to take away and add). */
   const plan = (fixtures: readonly RigFixture[]) => {
-    if (sharing) throw new Error('the light map engine was asked for a new grid before the last one was put together');
+    if (sharing)
+      throw new Error('the light map engine was asked for a new grid before the last one was put together');
     const next = new Map<string, Entry>();
     const changes: { before?: PreparedSource; after?: PreparedSource }[] = [];
     for (const fixture of fixtures) {
       const previous = current.get(fixture.id);
       if (previous && (previous.fixture === fixture || samePlainData(previous.fixture, fixture))) {
-        next.set(fixture.id, previous.fixture === fixture ? previous : { fixture, prepared: previous.prepared });
+        next.set(
+          fixture.id,
+          previous.fixture === fixture ? previous : { fixture, prepared: previous.prepared },
+        );
         continue;
       }
       const prepared = prepareSource(fixture, spec);
@@ -117,7 +152,17 @@ export function createCoverageEngine(spec: CoverageSpec, share: RowShare = EVERY
     const started = performance.now();
     grid.values.fill(0);
     grid.overlaps.fill(0);
-    for (const entry of next.values()) accumulateSource(entry.prepared, spec, normals, grid, 1, rows);
+    const tables: ProfileTable[] = [];
+    if (simd)
+      for (const { prepared } of next.values()) if (prepared.kind === 'round') tables.push(prepared.table);
+    const accumulateAll = (target: AccumulateTarget) => {
+      for (const entry of next.values()) accumulateSource(entry.prepared, spec, normals, target, 1, rows);
+    };
+    if (tables.length === 0) accumulateAll(grid);
+    else
+      withSimdRows(grid.values, spec.grid.rows, tables, (batch) =>
+        accumulateAll(batch ? { values: batch.values, overlaps: grid.overlaps, simd: batch } : grid),
+      );
     if (rows.every === 1) fullMs = performance.now() - started;
   };
 
@@ -130,6 +175,7 @@ export function createCoverageEngine(spec: CoverageSpec, share: RowShare = EVERY
 
   return {
     spec,
+    simd,
     update(fixtures, options) {
       const { next, changes, restart: startAgain } = plan(fixtures);
       if (startAgain || options?.restart) restart(next, share);
@@ -163,9 +209,12 @@ export function createCoverageEngine(spec: CoverageSpec, share: RowShare = EVERY
         const ownMs = performance.now() - started;
         const answers = await Promise.allSettled(parts);
         answers.forEach((answer, index) => {
-          if (answer.status === 'fulfilled' && fitsGrid(answer.value, grid)) copyShareRows(answer.value, grid, shareOf(index));
+          if (answer.status === 'fulfilled' && fitsGrid(answer.value, grid))
+            copyShareRows(answer.value, grid, shareOf(index));
           // A helper that failed (a worker gone, say) costs time, never the map: its rows are done here.
-          else for (const entry of next.values()) accumulateSource(entry.prepared, spec, normals, grid, 1, shareOf(index));
+          else
+            for (const entry of next.values())
+              accumulateSource(entry.prepared, spec, normals, grid, 1, shareOf(index));
         });
         fullMs = ownMs * every;
       } finally {

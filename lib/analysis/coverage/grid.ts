@@ -47,12 +47,18 @@ export function firstRowOfShare(row: number, share: RowShare): number {
 export const MAX_GRID_CELLS = 1_000_000;
 
 /** A grid of `spacingM` cells covering a plan rectangle; throws for a spacing ≤ 0 or too many cells. */
-export function gridOver(bounds: { minX: number; maxX: number; minY: number; maxY: number }, spacingM: number): GridSpec {
-  if (!(spacingM > 0) || !Number.isFinite(spacingM)) throw new RangeError(`grid spacing must be greater than 0 (got ${spacingM})`);
+export function gridOver(
+  bounds: { minX: number; maxX: number; minY: number; maxY: number },
+  spacingM: number,
+): GridSpec {
+  if (!(spacingM > 0) || !Number.isFinite(spacingM))
+    throw new RangeError(`grid spacing must be greater than 0 (got ${spacingM})`);
   const columns = Math.max(1, Math.ceil((bounds.maxX - bounds.minX) / spacingM - 1e-9));
   const rows = Math.max(1, Math.ceil((bounds.maxY - bounds.minY) / spacingM - 1e-9));
   if (columns * rows > MAX_GRID_CELLS) {
-    throw new RangeError(`a ${spacingM} m grid over this area has ${columns * rows} cells; the most is ${MAX_GRID_CELLS}`);
+    throw new RangeError(
+      `a ${spacingM} m grid over this area has ${columns * rows} cells; the most is ${MAX_GRID_CELLS}`,
+    );
   }
   return { minX: bounds.minX, minY: bounds.minY, spacingM, columns, rows };
 }

@@ -10,12 +10,16 @@ export interface IsoluxLine {
 
 /** Isolux rings of `values` on `grid` at each level (lx). */
 export function isoluxLines(grid: GridSpec, values: Float64Array, levelsLx: readonly number[]): IsoluxLine[] {
-  const generator = contours().size([grid.columns, grid.rows]).thresholds([...levelsLx]);
+  const generator = contours()
+    .size([grid.columns, grid.rows])
+    .thresholds([...levelsLx]);
   // d3-contour puts cell (c, r) between c and c + 1: plan x = minX + X·spacing, likewise y.
   return generator(Array.from(values)).map((multiPolygon) => ({
     levelLx: multiPolygon.value,
     rings: multiPolygon.coordinates.flatMap((polygon) =>
-      polygon.map((ring) => ring.map(([x, y]) => ({ x: grid.minX + x * grid.spacingM, y: grid.minY + y * grid.spacingM }))),
+      polygon.map((ring) =>
+        ring.map(([x, y]) => ({ x: grid.minX + x * grid.spacingM, y: grid.minY + y * grid.spacingM })),
+      ),
     ),
   }));
 }

@@ -9,13 +9,25 @@
 import { beamOutlineOnPlane } from '../../geometry/footprint';
 import { type Vec3, normalize, subtract, vec3 } from '../../geometry/vector';
 import { degToRad } from '../../numeric';
-import { areaSourceIlluminanceLx, largestDimensionM, PHOTOMETRIC_DISTANCE_FACTOR } from '../../photometry/areaSource';
+import {
+  areaSourceIlluminanceLx,
+  largestDimensionM,
+  PHOTOMETRIC_DISTANCE_FACTOR,
+} from '../../photometry/areaSource';
 import { profileEdgeAngleRad, spreadHalfAnglesAt } from '../../photometry/beam';
 import { fixtureIlluminanceLx, hasNoAim } from '../fixtureLight';
 import type { RigFixture } from '../rig';
-import { type CoverageSpec, EVERY_ROW, type RowShare, cellCentreX, cellCentreY, firstRowOfShare } from './grid';
+import {
+  type CoverageSpec,
+  EVERY_ROW,
+  type RowShare,
+  cellCentreX,
+  cellCentreY,
+  firstRowOfShare,
+} from './grid';
 import { type ProfileTable, profileTable } from './profileTable';
 import { accumulateRound } from './roundKernel';
+import type { SimdBatch } from './simdRows';
 
 /** The cells a source can reach: inclusive column and row ranges. */
 export interface CellRange {
@@ -65,7 +77,12 @@ export function cellNormals(spec: CoverageSpec): CellNormals {
   return { horizontal: plane.kind === 'horizontal', x, y };
 }
 
-const WHOLE = (spec: CoverageSpec): CellRange => ({ firstColumn: 0, lastColumn: spec.grid.columns - 1, firstRow: 0, lastRow: spec.grid.rows - 1 });
+const WHOLE = (spec: CoverageSpec): CellRange => ({
+  firstColumn: 0,
+  lastColumn: spec.grid.columns - 1,
+  firstRow: 0,
+  lastRow: spec.grid.rows - 1,
+});
 
 /** Cells inside a plan polygon's bounding box, widened by two cells; null when it misses the grid. */
 function rangeAround(spec: CoverageSpec, points: readonly { x: number; y: number }[]): CellRange | null {
@@ -89,8 +106,14 @@ function rangeAround(spec: CoverageSpec, points: readonly { x: number; y: number
 }
 
 /** The cells inside a beam's edge on the grid's plane (the whole grid if the edge does not close). */
-function beamRange(spec: CoverageSpec, fixture: RigFixture, halfAngleAt: (azimuth: number) => number): CellRange | null {
-  const outline = beamOutlineOnPlane(fixture.mount, fixture.focus, halfAngleAt, spec.plane.heightM, { segments: 96 });
+function beamRange(
+  spec: CoverageSpec,
+  fixture: RigFixture,
+  halfAngleAt: (azimuth: number) => number,
+): CellRange | null {
+  const outline = beamOutlineOnPlane(fixture.mount, fixture.focus, halfAngleAt, spec.plane.heightM, {
+    segments: 96,
+  });
   switch (outline.state) {
     case 'closed':
       return rangeAround(spec, outline.polygon);
@@ -135,6 +158,8 @@ export interface AccumulateTarget {
   readonly values: Float64Array;
   /** Per cell, how many beams (50 % contour) cover it. */
   readonly overlaps: Uint16Array;
+  /** A SIMD batch the values live in (simdRows.ts), if any. */
+  readonly simd?: SimdBatch | null;
 }
 
 /** Add (sign +1) or take away (sign −1) one prepared source's light on every cell it reaches in `share`'s rows. */

@@ -62,15 +62,23 @@ const FINE_INTERVALS = 256;
 const COSINE_ROUNDING = 4e-16;
 
 /** Chebyshev points on [−1, 1] and the inverse of their Vandermonde matrix (monomials from values). */
-const chebyshev = Array.from({ length: NODES }, (_, index) => Math.cos(((2 * index + 1) * Math.PI) / (2 * NODES)));
-const inverseVandermonde = invert(chebyshev.map((x) => Array.from({ length: NODES }, (_, power) => x ** power)));
+const chebyshev = Array.from({ length: NODES }, (_, index) =>
+  Math.cos(((2 * index + 1) * Math.PI) / (2 * NODES)),
+);
+const inverseVandermonde = invert(
+  chebyshev.map((x) => Array.from({ length: NODES }, (_, power) => x ** power)),
+);
 
 function invert(matrix: number[][]): number[][] {
   const size = matrix.length;
-  const work = matrix.map((row, index) => [...row, ...Array.from({ length: size }, (_, column) => (column === index ? 1 : 0))]);
+  const work = matrix.map((row, index) => [
+    ...row,
+    ...Array.from({ length: size }, (_, column) => (column === index ? 1 : 0)),
+  ]);
   for (let column = 0; column < size; column += 1) {
     let pivot = column;
-    for (let row = column + 1; row < size; row += 1) if (Math.abs(work[row][column]) > Math.abs(work[pivot][column])) pivot = row;
+    for (let row = column + 1; row < size; row += 1)
+      if (Math.abs(work[row][column]) > Math.abs(work[pivot][column])) pivot = row;
     [work[column], work[pivot]] = [work[pivot], work[column]];
     const lead = work[column][column];
     for (let entry = 0; entry < 2 * size; entry += 1) work[column][entry] /= lead;
@@ -88,7 +96,11 @@ function evaluate(coefficients: Float64Array, interval: number, u: number): numb
   const base = interval * NODES;
   return (
     coefficients[base] +
-    u * (coefficients[base + 1] + u * (coefficients[base + 2] + u * (coefficients[base + 3] + u * (coefficients[base + 4] + u * coefficients[base + 5]))))
+    u *
+      (coefficients[base + 1] +
+        u *
+          (coefficients[base + 2] +
+            u * (coefficients[base + 3] + u * (coefficients[base + 4] + u * coefficients[base + 5]))))
   );
 }
 
@@ -100,12 +112,22 @@ interface Built {
 }
 
 /** Fit `intervals` pieces over s ∈ [0, span], from interval `first` on, and check each. */
-function build(intervals: number, span: number, first: number, beamHalfRad: number, fieldHalfRad: number, edge: number): Built {
+function build(
+  intervals: number,
+  span: number,
+  first: number,
+  beamHalfRad: number,
+  fieldHalfRad: number,
+  edge: number,
+): Built {
   const sinHalfEdge = Math.sin(edge / 2);
   const oneMinusCosEdge = 1 - Math.cos(edge);
   const exponent = profileExponent(beamHalfRad, fieldHalfRad);
   // profileShape's own expression, with the exponent worked out once.
-  const exactAt = (s: number) => Math.exp(-Math.LN2 * Math.pow((2 * Math.asin(Math.min(1, Math.sqrt(s) * sinHalfEdge))) / beamHalfRad, exponent));
+  const exactAt = (s: number) =>
+    Math.exp(
+      -Math.LN2 * Math.pow((2 * Math.asin(Math.min(1, Math.sqrt(s) * sinHalfEdge))) / beamHalfRad, exponent),
+    );
   // Rounding of s: δs/s ≈ COSINE_ROUNDING / (1 − cos θ), and d ln f / d ln s = ln2·p·(θ/hb)^p·tan(θ/2)/θ,
   // so f is off by about that product. At s = 0 its limit is 0 for p > 2 and unbounded for p < 2.
   const roundingAt = (s: number, value: number) => {
@@ -124,7 +146,8 @@ function build(intervals: number, span: number, first: number, beamHalfRad: numb
   const step = span / intervals;
   let left = exactAt(first * step);
   for (let interval = first; interval < intervals; interval += 1) {
-    for (let node = 0; node < NODES; node += 1) values[node] = exactAt((interval + (chebyshev[node] + 1) / 2) * step);
+    for (let node = 0; node < NODES; node += 1)
+      values[node] = exactAt((interval + (chebyshev[node] + 1) / 2) * step);
     for (let power = 0; power < NODES; power += 1) {
       let sum = 0;
       for (let node = 0; node < NODES; node += 1) sum += inverseVandermonde[power][node] * values[node];

@@ -16,7 +16,10 @@ import { cellNormals, cellwiseIlluminance } from './kernel';
 function insideBeamAngle(fixture: RigFixture, point: Vec3): boolean {
   const source = fixture.source;
   if (source.kind !== 'beam' || source.spread.kind !== 'round' || hasNoAim(fixture)) return false;
-  const { offAxisRad, azimuthRad } = directionInBeamFrame(subtract(fixture.focus, fixture.mount), subtract(point, fixture.mount));
+  const { offAxisRad, azimuthRad } = directionInBeamFrame(
+    subtract(fixture.focus, fixture.mount),
+    subtract(point, fixture.mount),
+  );
   return spreadProfile(source.spread, offAxisRad, azimuthRad) >= 0.5;
 }
 
@@ -24,7 +27,11 @@ function insideBeamAngle(fixture: RigFixture, point: Vec3): boolean {
 export function bruteForceCoverage(spec: CoverageSpec, fixtures: readonly RigFixture[]): CoverageGrid {
   const { grid, plane } = spec;
   const normals = cellNormals(spec);
-  const result: CoverageGrid = { spec, values: new Float64Array(cellCount(grid)), overlaps: new Uint16Array(cellCount(grid)) };
+  const result: CoverageGrid = {
+    spec,
+    values: new Float64Array(cellCount(grid)),
+    overlaps: new Uint16Array(cellCount(grid)),
+  };
   const up = vec3(0, 0, 1);
   for (const fixture of fixtures) {
     for (let row = 0; row < grid.rows; row += 1) {

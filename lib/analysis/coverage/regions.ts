@@ -26,7 +26,12 @@ export interface LightRegion {
   readonly reason: 'over target' | 'beams pile up' | 'under target';
   /** Centre of the region in plan (mean of its cells), m. */
   readonly centre: { readonly x: number; readonly y: number };
-  readonly bounds: { readonly minX: number; readonly maxX: number; readonly minY: number; readonly maxY: number };
+  readonly bounds: {
+    readonly minX: number;
+    readonly maxX: number;
+    readonly minY: number;
+    readonly maxY: number;
+  };
   readonly areaM2: number;
   /** The brightest (hot) or darkest (dark) cell's illuminance, lx, and where it is. */
   readonly extremeLx: number;
@@ -115,9 +120,13 @@ function describeRegion(
     maxX = Math.max(maxX, x);
     minY = Math.min(minY, y);
     maxY = Math.max(maxY, y);
-    if (hot ? values[index] > values[extremeIndex] : values[index] < values[extremeIndex]) extremeIndex = index;
+    if (hot ? values[index] > values[extremeIndex] : values[index] < values[extremeIndex])
+      extremeIndex = index;
   }
-  const extremeAt = { x: cellCentreX(spec.grid, extremeIndex % columns), y: cellCentreY(spec.grid, Math.floor(extremeIndex / columns)) };
+  const extremeAt = {
+    x: cellCentreX(spec.grid, extremeIndex % columns),
+    y: cellCentreY(spec.grid, Math.floor(extremeIndex / columns)),
+  };
   const plane = spec.plane;
   const point = vec3(extremeAt.x, extremeAt.y, plane.heightM);
   let normal = vec3(0, 0, 1);

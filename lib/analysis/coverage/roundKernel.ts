@@ -5,11 +5,13 @@
  * the table polynomial (profileTable.ts) and one add, E = I0·f(θ)·cos i / d². Cells near the axis are
  * put aside and done after the row with the fine table or the closed form from the angle itself. A
  * horizontal plane lit from above has its own loop (cos i = −dz/d on every cell, the beam-angle count
- * by row interval); vertical faces and fixtures at or below the plane take the general loop.
+ * by row interval), which inside a SIMD batch (simdRows.ts) becomes row records for the WebAssembly
+ * loop, run after the rows; vertical faces and fixtures at or below the plane take the general loop.
  */
 import type { Vec3 } from '../../geometry/vector';
 import { type CoverageSpec, EVERY_ROW, type RowShare, firstRowOfShare } from './grid';
 import { type ProfileTable, exactTableProfile, nearAxisProfile } from './profileTable';
+import { RECORD_BYTES, type SimdBatch } from './simdRows';
 
 export interface RoundBeam {
   readonly mount: Vec3;
@@ -22,6 +24,8 @@ export interface RoundBeam {
 export interface RoundTarget {
   readonly values: Float64Array;
   readonly overlaps: Uint16Array;
+  /** During a SIMD batch (simdRows.ts, `values` is then its view): lit-from-above rows go to WebAssembly. */
+  readonly simd?: SimdBatch | null;
 }
 
 export interface RoundNormals {
@@ -89,7 +93,13 @@ export function rowInterval(axis: Vec3, cosEdge: number, dy: number, dz: number,
  * when it opens downward the rows lie between its roots (with one row of margin), otherwise any row
  * may. A superset: rowInterval decides each row exactly.
  */
-function rowRange(axis: Vec3, cosEdge: number, dz: number, mountY: number, spec: CoverageSpec): { first: number; last: number } {
+function rowRange(
+  axis: Vec3,
+  cosEdge: number,
+  dz: number,
+  mountY: number,
+  spec: CoverageSpec,
+): { first: number; last: number } {
   const { grid } = spec;
   const g = cosEdge * cosEdge - axis.x * axis.x;
   const a = axis.y * axis.y - g;
@@ -104,11 +114,23 @@ function rowRange(axis: Vec3, cosEdge: number, dz: number, mountY: number, spec:
   // Row r has dy = minY + (r + ½)·spacing − mountY.
   const first = Math.floor((mountY + Math.min(one, other) - grid.minY) / grid.spacingM - 0.5) - 1;
   const last = Math.ceil((mountY + Math.max(one, other) - grid.minY) / grid.spacingM - 0.5) + 1;
-  return { first: Math.max(0, first), last: Math.min(grid.rows - 1, last) };
+  // `| 0` (values are clamped to the grid first): Math.floor/ceil can give −0, after which the optimiser
+  // may carry row and column numbers as doubles for good; the loops are much slower so.
+  return {
+    first: Math.max(0, Math.min(grid.rows, first)) | 0,
+    last: Math.min(grid.rows - 1, Math.max(-1, last)) | 0,
+  };
 }
 
 /** The closed form near the axis: θ = atan2(|a × d|, a · d), as the point-source functions take it. */
-function nearAxis(table: ProfileTable, axis: Vec3, dx: number, dy: number, dz: number, along: number): number {
+function nearAxis(
+  table: ProfileTable,
+  axis: Vec3,
+  dx: number,
+  dy: number,
+  dz: number,
+  along: number,
+): number {
   const cx = axis.y * dz - axis.z * dy;
   const cy = axis.z * dx - axis.x * dz;
   const cz = axis.x * dy - axis.y * dx;
@@ -119,6 +141,10 @@ function nearAxis(table: ProfileTable, axis: Vec3, dx: number, dy: number, dz: n
 const rowBounds = new Float64Array(2);
 const beamBounds = new Float64Array(2);
 let nearAxisScratch = new Int32Array(256);
+// dy of each row record handed to the SIMD loop, for its near-axis cells.
+let recordDy = new Float64Array(256);
+const RECORD_DOUBLES = RECORD_BYTES / 8;
+const RECORD_INTS = RECORD_BYTES / 4;
 
 /**
  * The table's degree-5 polynomial at `position` (≥ deferBelow), by Estrin's scheme (shorter chains of
@@ -129,7 +155,65 @@ export function tablePolynomial(coefficients: Float64Array, position: number): n
   const u = 2 * (position - slot) - 1;
   const base = slot * 6;
   const u2 = u * u;
-  return coefficients[base] + u * coefficients[base + 1] + u2 * (coefficients[base + 2] + u * coefficients[base + 3] + u2 * (coefficients[base + 4] + u * coefficients[base + 5]));
+  return (
+    coefficients[base] +
+    u * coefficients[base + 1] +
+    u2 *
+      (coefficients[base + 2] +
+        u * coefficients[base + 3] +
+        u2 * (coefficients[base + 4] + u * coefficients[base + 5]))
+  );
+}
+
+/**
+ * One row of a plane lit from above, in JavaScript (the loop simd/lightRows.wat does two cells at a time,
+ * operation for operation): adds each lit cell's light and lists the near-axis cells in
+ * `nearAxisColumns`; returns how many.
+ */
+function lightRowFromAbove(
+  values: Float64Array,
+  coefficients: Float64Array,
+  nearAxisColumns: Int32Array,
+  rowStart: number,
+  firstColumn: number,
+  lastColumn: number,
+  x0: number,
+  spacing: number,
+  ax: number,
+  alongRow: number,
+  dy2dz2: number,
+  cosEdge: number,
+  positionScale: number,
+  deferBelow: number,
+  scaled: number,
+): number {
+  let nearAxisCount = 0;
+  for (let column = firstColumn; column <= lastColumn; column += 1) {
+    const dx = x0 + column * spacing;
+    const inverseDistance = 1 / Math.sqrt(dx * dx + dy2dz2);
+    const cosOffAxis = (dx * ax + alongRow) * inverseDistance;
+    if (cosOffAxis <= cosEdge) continue;
+    const position = (1 - cosOffAxis) * positionScale;
+    if (position < deferBelow) {
+      nearAxisColumns[nearAxisCount] = column;
+      nearAxisCount += 1;
+      continue;
+    }
+    const slot = position | 0;
+    const u = 2 * (position - slot) - 1;
+    const base = slot * 6;
+    const u2 = u * u;
+    const relative =
+      coefficients[base] +
+      u * coefficients[base + 1] +
+      u2 *
+        (coefficients[base + 2] +
+          u * coefficients[base + 3] +
+          u2 * (coefficients[base + 4] + u * coefficients[base + 5]));
+    const index = rowStart + column;
+    values[index] += scaled * relative * inverseDistance * inverseDistance * inverseDistance;
+  }
+  return nearAxisCount;
 }
 
 /** Add (sign +1) or take away (sign −1) one round beam's light on the cells it reaches, in `share`'s rows. */
@@ -162,6 +246,11 @@ export function accumulateRound(
   // For a horizontal plane lit from above, cos i / d² = −dz / d³ on every cell.
   const scaled = sign * beam.peakCd * (fromAbove ? -dz : 1);
   const rows = rowRange(axis, cosEdge, dz, mount.y, spec);
+  // Lit from above inside a SIMD batch: rows become records for the WebAssembly loop, run after the rows.
+  const batch = fromAbove && target.simd ? target.simd : null;
+  const vector = batch !== null && batch.tableAddress(table) !== undefined;
+  if (vector && recordDy.length < grid.rows) recordDy = new Float64Array(grid.rows);
+  let recordCount = 0;
   for (let row = firstRowOfShare(rows.first, share); row <= rows.last; row += share.every) {
     const dy = grid.minY + (row + 0.5) * spacing - mount.y;
     // Visit only the cells of this row inside the beam's edge (one cell of margin for rounding).
@@ -170,54 +259,64 @@ export function accumulateRound(
     // then keeps the column numbers as small integers instead of falling back to doubles.
     const lowCell = (interval[0] - x0) / spacing;
     const highCell = (interval[1] - x0) / spacing;
-    const firstColumn = lowCell > 1 ? Math.floor(lowCell) - 1 : 0;
-    const lastColumn = highCell < columns - 2 ? Math.ceil(highCell) + 1 : columns - 1;
+    const firstColumn = lowCell > 1 ? Math.min(columns, Math.floor(lowCell) - 1) | 0 : 0;
+    const lastColumn = highCell < columns - 2 ? Math.max(-1, Math.ceil(highCell) + 1) | 0 : columns - 1;
     const rowStart = row * columns;
     const dy2dz2 = dy * dy + dz * dz;
     const alongRow = dy * axis.y + dz * axis.z;
     let nearAxisCount = 0;
     if (fromAbove) {
-      for (let column = firstColumn; column <= lastColumn; column += 1) {
-        const dx = x0 + column * spacing;
-        const inverseDistance = 1 / Math.sqrt(dx * dx + dy2dz2);
-        const cosOffAxis = (dx * ax + alongRow) * inverseDistance;
-        if (cosOffAxis <= cosEdge) continue;
-        const position = (1 - cosOffAxis) * positionScale;
-        if (position < deferBelow) {
-          nearAxisColumns[nearAxisCount] = column;
-          nearAxisCount += 1;
-          continue;
-        }
-        const slot = position | 0;
-        const u = 2 * (position - slot) - 1;
-        const base = slot * 6;
-        const u2 = u * u;
-        const relative =
-          coefficients[base] +
-          u * coefficients[base + 1] +
-          u2 * (coefficients[base + 2] + u * coefficients[base + 3] + u2 * (coefficients[base + 4] + u * coefficients[base + 5]));
-        const index = rowStart + column;
-        values[index] += scaled * relative * inverseDistance * inverseDistance * inverseDistance;
+      if (vector) {
+        const f64 = batch.recordsF64;
+        const i32 = batch.recordsI32;
+        f64[recordCount * RECORD_DOUBLES] = dy2dz2;
+        f64[recordCount * RECORD_DOUBLES + 1] = alongRow;
+        i32[recordCount * RECORD_INTS + 4] = rowStart;
+        i32[recordCount * RECORD_INTS + 5] = firstColumn;
+        i32[recordCount * RECORD_INTS + 6] = lastColumn;
+        recordDy[recordCount] = dy;
+        recordCount += 1;
+      }
+      if (!vector) {
+        nearAxisCount = lightRowFromAbove(
+          values,
+          coefficients,
+          nearAxisColumns,
+          rowStart,
+          firstColumn,
+          lastColumn,
+          x0,
+          spacing,
+          ax,
+          alongRow,
+          dy2dz2,
+          cosEdge,
+          positionScale,
+          deferBelow,
+          scaled,
+        );
       }
       // Every cell here is lit, so the beam-angle count is the cells with cos θ ≥ cos hb: those a cell or
       // more inside the row's beam-angle interval at once, the few near its ends one by one.
       if (rowInterval(axis, cosBeam, dy, dz, beamBounds)) {
         const low = Math.max(-2, (beamBounds[0] - x0) / spacing);
         const high = Math.min(columns + 1, (beamBounds[1] - x0) / spacing);
-        const outerFrom = Math.max(0, Math.floor(low) - 1);
-        const outerTo = Math.min(columns - 1, Math.ceil(high) + 1);
-        const innerFrom = Math.max(outerFrom, Math.ceil(low) + 1);
-        const innerTo = Math.min(outerTo, Math.floor(high) - 1);
+        const outerFrom = Math.max(0, Math.floor(low) - 1) | 0;
+        const outerTo = Math.min(columns - 1, Math.ceil(high) + 1) | 0;
+        const innerFrom = Math.max(outerFrom, Math.ceil(low) + 1) | 0;
+        const innerTo = Math.min(outerTo, Math.floor(high) - 1) | 0;
         const checkUntil = innerFrom <= innerTo ? innerFrom : outerTo + 1;
         let column = outerFrom;
         for (; column < checkUntil; column += 1) {
           const dx = x0 + column * spacing;
-          if ((dx * ax + alongRow) * (1 / Math.sqrt(dx * dx + dy2dz2)) >= cosBeam) overlaps[rowStart + column] += sign;
+          if ((dx * ax + alongRow) * (1 / Math.sqrt(dx * dx + dy2dz2)) >= cosBeam)
+            overlaps[rowStart + column] += sign;
         }
         for (; column <= innerTo; column += 1) overlaps[rowStart + column] += sign;
         for (; column <= outerTo; column += 1) {
           const dx = x0 + column * spacing;
-          if ((dx * ax + alongRow) * (1 / Math.sqrt(dx * dx + dy2dz2)) >= cosBeam) overlaps[rowStart + column] += sign;
+          if ((dx * ax + alongRow) * (1 / Math.sqrt(dx * dx + dy2dz2)) >= cosBeam)
+            overlaps[rowStart + column] += sign;
         }
       }
     } else {
@@ -230,7 +329,9 @@ export function accumulateRound(
         if (cosOffAxis <= cosEdge) continue;
         const index = rowStart + column;
         // Incidence: the direction from the cell back to the fixture is −(dx, dy, dz).
-        const cosIncidence = normals.horizontal ? -dz * inverseDistance : -(dx * normalX[index] + dy * normalY[index]) * inverseDistance;
+        const cosIncidence = normals.horizontal
+          ? -dz * inverseDistance
+          : -(dx * normalX[index] + dy * normalY[index]) * inverseDistance;
         if (cosIncidence <= 0) continue;
         const position = (1 - cosOffAxis) * positionScale;
         if (position < deferBelow) {
@@ -238,7 +339,8 @@ export function accumulateRound(
           nearAxisCount += 1;
           continue;
         }
-        values[index] += scaled * tablePolynomial(coefficients, position) * cosIncidence * inverseDistance * inverseDistance;
+        values[index] +=
+          scaled * tablePolynomial(coefficients, position) * cosIncidence * inverseDistance * inverseDistance;
         if (cosOffAxis >= cosBeam) overlaps[index] += sign;
       }
     }
@@ -259,6 +361,25 @@ export function accumulateRound(
           : -(dx * normalX[index] + dy * normalY[index]) * inverseDistance;
       values[index] += scaled * relative * perDistanceSquared * inverseDistance * inverseDistance;
       if (!fromAbove && cosOffAxis >= cosBeam) overlaps[index] += sign;
+    }
+  }
+  if (vector && recordCount > 0) {
+    // The rows in WebAssembly, then its near-axis cells here, as the loop above does them.
+    const nearCount = batch.lightRows(x0, spacing, ax, table, scaled, recordCount);
+    const near = batch.near;
+    const f64 = batch.recordsF64;
+    const i32 = batch.recordsI32;
+    for (let entry = 0; entry < nearCount; entry += 1) {
+      const record = near[entry * 2];
+      const column = near[entry * 2 + 1];
+      const dy = recordDy[record];
+      const dx = x0 + column * spacing;
+      const inverseDistance = 1 / Math.sqrt(dx * dx + f64[record * RECORD_DOUBLES]);
+      const along = dx * ax + f64[record * RECORD_DOUBLES + 1];
+      const fine = nearAxisProfile(table, (1 - along * inverseDistance) * positionScale);
+      const relative = Number.isNaN(fine) ? nearAxis(table, axis, dx, dy, dz, along) : fine;
+      values[i32[record * RECORD_INTS + 4] + column] +=
+        scaled * relative * inverseDistance * inverseDistance * inverseDistance;
     }
   }
 }

@@ -31,7 +31,11 @@ export interface CoverageRequest {
 export interface CoverageResponse {
   readonly spec: CoverageSpec;
   readonly values: Float64Array;
-  readonly statistics: readonly { readonly id: string; readonly name: string; readonly figures: AreaStatistics | null }[];
+  readonly statistics: readonly {
+    readonly id: string;
+    readonly name: string;
+    readonly figures: AreaStatistics | null;
+  }[];
   readonly regions: readonly LightRegion[];
   readonly isolux: readonly IsoluxLine[];
   readonly maxLx: number;
@@ -39,6 +43,8 @@ export interface CoverageResponse {
   readonly recomputed: number;
   /** Threads that computed the grid for this answer (more than 1 when a full recompute was shared out). */
   readonly threads: number;
+  /** Whether full recomputes of this grid run the WebAssembly SIMD loop. */
+  readonly simd: boolean;
   readonly elapsedMs: number;
 }
 
@@ -54,7 +60,10 @@ export interface SharedCoverageService {
 function createDescriber() {
   let masks = new Map<string, Uint8Array>();
   let masksFor = '';
-  return (request: CoverageRequest, grid: CoverageGrid): Omit<CoverageResponse, 'recomputed' | 'threads' | 'elapsedMs'> => {
+  return (
+    request: CoverageRequest,
+    grid: CoverageGrid,
+  ): Omit<CoverageResponse, 'recomputed' | 'threads' | 'simd' | 'elapsedMs'> => {
     const gridKey = JSON.stringify(request.spec.grid);
     if (gridKey !== masksFor) {
       masks = new Map();
@@ -111,7 +120,13 @@ export function createCoverageService(now: () => number = () => performance.now(
         engineKey = key;
       }
       const grid = engine.update(request.fixtures);
-      return { ...describe(request, grid), recomputed: engine.lastRecomputed(), threads: engine.lastThreads(), elapsedMs: now() - started };
+      return {
+        ...describe(request, grid),
+        recomputed: engine.lastRecomputed(),
+        threads: engine.lastThreads(),
+        simd: engine.simd,
+        elapsedMs: now() - started,
+      };
     },
   };
 }
@@ -137,7 +152,13 @@ export function createSharedCoverageService(
       engineKey = key;
     }
     const grid = await engine.updateSharing(request.fixtures, helpers, { shareFromMs: options.shareFromMs });
-    return { ...describe(request, grid), recomputed: engine.lastRecomputed(), threads: engine.lastThreads(), elapsedMs: now() - started };
+    return {
+      ...describe(request, grid),
+      recomputed: engine.lastRecomputed(),
+      threads: engine.lastThreads(),
+      simd: engine.simd,
+      elapsedMs: now() - started,
+    };
   };
   return {
     handle(request) {

@@ -12,12 +12,16 @@ export interface SharePort {
   start?(): void;
 }
 
-type ShareAnswer = { readonly id: number; readonly result: ShareResult } | { readonly id: number; readonly error: string };
+type ShareAnswer =
+  { readonly id: number; readonly result: ShareResult } | { readonly id: number; readonly error: string };
 
 /** A helper that sends each request over `port` and resolves with the answer of the same number. */
 export function shareHelperOverPort(port: SharePort): ShareHelper {
   let nextId = 0;
-  const waiting = new Map<number, { resolve: (result: ShareResult) => void; reject: (error: Error) => void }>();
+  const waiting = new Map<
+    number,
+    { resolve: (result: ShareResult) => void; reject: (error: Error) => void }
+  >();
   port.addEventListener('message', (event) => {
     const answer = event.data as ShareAnswer;
     const entry = waiting.get(answer.id);

@@ -50,7 +50,7 @@ export function createShareComputer(): (request: ShareRequest) => ShareResult {
   return (request) => {
     const key = JSON.stringify([request.spec, request.share]);
     if (!engine || key !== engineKey) {
-      engine = createCoverageEngine(request.spec, request.share);
+      engine = createCoverageEngine(request.spec, { share: request.share });
       engineKey = key;
     }
     const grid = engine.update(request.fixtures, { restart: true });

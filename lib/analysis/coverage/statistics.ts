@@ -25,7 +25,11 @@ export interface AreaStatistics {
 }
 
 /** Statistics of `values` over the cells whose mask is 1 (all cells when mask is null); null if no cell counts. */
-export function areaStatistics(values: Float64Array, mask: Uint8Array | null, band: TargetBand): AreaStatistics | null {
+export function areaStatistics(
+  values: Float64Array,
+  mask: Uint8Array | null,
+  band: TargetBand,
+): AreaStatistics | null {
   let cells = 0;
   let sum = 0;
   let min = Infinity;

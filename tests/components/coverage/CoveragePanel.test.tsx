@@ -20,7 +20,13 @@ describe('the light map panel', () => {
   it('shows the whole-stage figures and lists the hot spot with the unit behind it; a click goes there', () => {
     const onShowRegion = vi.fn();
     renderWithEditor(
-      <CoveragePanel settings={settings} onSettingsChange={() => {}} status={{ state: 'ready', response: map }} map={map} onShowRegion={onShowRegion} />,
+      <CoveragePanel
+        settings={settings}
+        onSettingsChange={() => {}}
+        status={{ state: 'ready', response: map }}
+        map={map}
+        onShowRegion={onShowRegion}
+      />,
       plot,
     );
     const stageRow = screen.getByRole('row', { name: /Whole stage/ });
@@ -34,7 +40,13 @@ describe('the light map panel', () => {
   it('changing the target reports the new level in lux', () => {
     const onSettingsChange = vi.fn();
     renderWithEditor(
-      <CoveragePanel settings={settings} onSettingsChange={onSettingsChange} status={{ state: 'idle' }} map={null} onShowRegion={() => {}} />,
+      <CoveragePanel
+        settings={settings}
+        onSettingsChange={onSettingsChange}
+        status={{ state: 'idle' }}
+        map={null}
+        onShowRegion={() => {}}
+      />,
       plot,
     );
     const target = screen.getByLabelText(/Target level/);
@@ -45,6 +57,8 @@ describe('the light map panel', () => {
 
   it('a request without a viewpoint for faces says what is missing', () => {
     const noViewpoint = { ...plot, viewpoints: [], mainViewpointId: null };
-    expect(coverageRequest(noViewpoint, createPlotDeriver()(noViewpoint), { ...settings, plane: 'toward' })).toMatch(/Choose a viewpoint/);
+    expect(
+      coverageRequest(noViewpoint, createPlotDeriver()(noViewpoint), { ...settings, plane: 'toward' }),
+    ).toMatch(/Choose a viewpoint/);
   });
 });

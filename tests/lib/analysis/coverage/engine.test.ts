@@ -12,10 +12,18 @@ import {
 import { beamIlluminanceLx } from '@/lib/photometry';
 import { type Vec3, vec3 } from '@/lib/geometry';
 
-const spec: CoverageSpec = { grid: gridOver({ minX: -6, maxX: 6, minY: -1, maxY: 7 }, 0.1), plane: { kind: 'horizontal', heightM: 1.6 } };
+const spec: CoverageSpec = {
+  grid: gridOver({ minX: -6, maxX: 6, minY: -1, maxY: 7 }, 0.1),
+  plane: { kind: 'horizontal', heightM: 1.6 },
+};
 
 function unit(id: string, mount: Vec3, focus: Vec3, peakCd = 30000, beam = 26, field = 40): RigFixture {
-  return { id, mount, focus, source: { kind: 'beam', spread: { kind: 'round', beamAngleDeg: beam, fieldAngleDeg: field }, peakCd } };
+  return {
+    id,
+    mount,
+    focus,
+    source: { kind: 'beam', spread: { kind: 'round', beamAngleDeg: beam, fieldAngleDeg: field }, peakCd },
+  };
 }
 
 function cellIndex(column: number, row: number) {
@@ -38,7 +46,14 @@ describe('the coverage engine', () => {
     for (let row = 0; row < spec.grid.rows; row += 1) {
       for (let column = 0; column < spec.grid.columns; column += 1) {
         const point = vec3(cellCentreX(spec.grid, column), cellCentreY(spec.grid, row), 1.6);
-        const exact = beamIlluminanceLx({ mount: fixture.mount, axis: vec3(1.5, 5, -4.4), peakCd: 42000, spread: { kind: 'round', beamAngleDeg: 19, fieldAngleDeg: 33 }, point, normal: vec3(0, 0, 1) });
+        const exact = beamIlluminanceLx({
+          mount: fixture.mount,
+          axis: vec3(1.5, 5, -4.4),
+          peakCd: 42000,
+          spread: { kind: 'round', beamAngleDeg: 19, fieldAngleDeg: 33 },
+          point,
+          normal: vec3(0, 0, 1),
+        });
         const engine = grid.values[cellIndex(column, row)];
         if (exact > 0) worst = Math.max(worst, Math.abs(engine - exact) / exact);
         else expect(engine).toBe(0);
@@ -68,18 +83,28 @@ describe('the coverage engine', () => {
     const cy = cellCentreY(spec.grid, 30);
     const ring = Array.from({ length: 6 }, (_, index) => {
       const angle = (index * Math.PI) / 3;
-      return unit(`r${index}`, vec3(cx + 4 * Math.cos(angle), cy + 4 * Math.sin(angle), 4.6), vec3(cx, cy, 1.6), 25000);
+      return unit(
+        `r${index}`,
+        vec3(cx + 4 * Math.cos(angle), cy + 4 * Math.sin(angle), 4.6),
+        vec3(cx, cy, 1.6),
+        25000,
+      );
     });
     const grid = createCoverageEngine(spec).update(ring);
     expect(grid.values[cellIndex(60, 30)]).toBeCloseTo((6 * 25000 * 3) / 125, 9); // 3600 lx
   });
 
   it('light on vertical faces turned toward a viewpoint uses each cell’s own facing', () => {
-    const toward: CoverageSpec = { grid: spec.grid, plane: { kind: 'toward', heightM: 1.6, viewpoint: vec3(0, -10, 1.6) } };
+    const toward: CoverageSpec = {
+      grid: spec.grid,
+      plane: { kind: 'toward', heightM: 1.6, viewpoint: vec3(0, -10, 1.6) },
+    };
     const x = cellCentreX(spec.grid, 60);
     const y = cellCentreY(spec.grid, 40);
     // A unit 4 m downstage of the cell at face height, aimed at it: normal incidence, E = I/16.
-    const grid = createCoverageEngine(toward).update([unit('a', vec3(x, y - 4, 1.6), vec3(x, y, 1.6), 16000)]);
+    const grid = createCoverageEngine(toward).update([
+      unit('a', vec3(x, y - 4, 1.6), vec3(x, y, 1.6), 16000),
+    ]);
     const facing = Math.atan2(y + 10, x); // the face turns toward (0, −10): not quite square to the unit
     const cosIncidence = Math.abs(Math.sin(facing));
     expect(grid.values[cellIndex(60, 40)]).toBeCloseTo(1000 * cosIncidence, 6);
@@ -98,9 +123,31 @@ describe('culled and incremental results equal the brute-force reference', () =>
     peak: fc.double({ min: 1000, max: 200000, noNaN: true }),
   };
   const arbitraryUnit = fc.record(unitFields);
-  const toUnit = (value: { mx: number; my: number; mz: number; fx: number; fy: number; beam: number; ratio: number; peak: number }, index: number) =>
-    unit(`u${index}`, vec3(value.mx, value.my, value.mz), vec3(value.fx, value.fy, 1.6), value.peak, value.beam, Math.min(value.beam * value.ratio, 170));
-  const coarse: CoverageSpec = { grid: gridOver({ minX: -6, maxX: 6, minY: -1, maxY: 7 }, 0.25), plane: { kind: 'horizontal', heightM: 1.6 } };
+  const toUnit = (
+    value: {
+      mx: number;
+      my: number;
+      mz: number;
+      fx: number;
+      fy: number;
+      beam: number;
+      ratio: number;
+      peak: number;
+    },
+    index: number,
+  ) =>
+    unit(
+      `u${index}`,
+      vec3(value.mx, value.my, value.mz),
+      vec3(value.fx, value.fy, 1.6),
+      value.peak,
+      value.beam,
+      Math.min(value.beam * value.ratio, 170),
+    );
+  const coarse: CoverageSpec = {
+    grid: gridOver({ minX: -6, maxX: 6, minY: -1, maxY: 7 }, 0.25),
+    plane: { kind: 'horizontal', heightM: 1.6 },
+  };
 
   function expectSame(a: Float64Array, b: Float64Array) {
     for (let index = 0; index < a.length; index += 1) {
@@ -111,16 +158,20 @@ describe('culled and incremental results equal the brute-force reference', () =>
 
   it('on random rigs, and after moving one unit', () => {
     fc.assert(
-      fc.property(fc.array(arbitraryUnit, { minLength: 1, maxLength: 12 }), arbitraryUnit, (values, moved) => {
-        const rig = values.map(toUnit);
-        const engine = createCoverageEngine(coarse);
-        expectSame(engine.update(rig).values, bruteForceCoverage(coarse, rig).values);
-        const changed = [...rig.slice(1), toUnit(moved, 0)];
-        const grid = engine.update(changed);
-        const reference = bruteForceCoverage(coarse, changed);
-        expectSame(grid.values, reference.values);
-        expect(grid.overlaps).toEqual(reference.overlaps);
-      }),
+      fc.property(
+        fc.array(arbitraryUnit, { minLength: 1, maxLength: 12 }),
+        arbitraryUnit,
+        (values, moved) => {
+          const rig = values.map(toUnit);
+          const engine = createCoverageEngine(coarse);
+          expectSame(engine.update(rig).values, bruteForceCoverage(coarse, rig).values);
+          const changed = [...rig.slice(1), toUnit(moved, 0)];
+          const grid = engine.update(changed);
+          const reference = bruteForceCoverage(coarse, changed);
+          expectSame(grid.values, reference.values);
+          expect(grid.overlaps).toEqual(reference.overlaps);
+        },
+      ),
       { numRuns: 40 },
     );
   }, 120_000); // the reference evaluates every unit on every cell through the general point-source functions
@@ -128,16 +179,23 @@ describe('culled and incremental results equal the brute-force reference', () =>
   it('on vertical faces turned toward a viewpoint, and with units level with or below the plane', () => {
     const low = fc.record({ ...unitFields, mz: fc.double({ min: 0.5, max: 9, noNaN: true }) });
     fc.assert(
-      fc.property(fc.array(low, { minLength: 1, maxLength: 8 }), fc.double({ min: -4, max: 4, noNaN: true }), (values, viewX) => {
-        const rig = values.map(toUnit);
-        const faces: CoverageSpec = { grid: coarse.grid, plane: { kind: 'toward', heightM: 1.6, viewpoint: vec3(viewX, -9, 1.6) } };
-        for (const plane of [faces, coarse]) {
-          const reference = bruteForceCoverage(plane, rig);
-          const grid = createCoverageEngine(plane).update(rig);
-          expectSame(grid.values, reference.values);
-          expect(grid.overlaps).toEqual(reference.overlaps);
-        }
-      }),
+      fc.property(
+        fc.array(low, { minLength: 1, maxLength: 8 }),
+        fc.double({ min: -4, max: 4, noNaN: true }),
+        (values, viewX) => {
+          const rig = values.map(toUnit);
+          const faces: CoverageSpec = {
+            grid: coarse.grid,
+            plane: { kind: 'toward', heightM: 1.6, viewpoint: vec3(viewX, -9, 1.6) },
+          };
+          for (const plane of [faces, coarse]) {
+            const reference = bruteForceCoverage(plane, rig);
+            const grid = createCoverageEngine(plane).update(rig);
+            expectSame(grid.values, reference.values);
+            expect(grid.overlaps).toEqual(reference.overlaps);
+          }
+        },
+      ),
       { numRuns: 20 },
     );
   }, 120_000);
@@ -159,7 +217,11 @@ describe('culled and incremental results equal the brute-force reference', () =>
   });
 
   it('an incremental update recomputes only the unit that changed', () => {
-    const rig = [unit('a', vec3(-2, -2, 6), vec3(-1, 2, 1.6)), unit('b', vec3(2, -2, 6), vec3(1, 2, 1.6)), unit('c', vec3(0, 8, 6), vec3(0, 4, 1.6))];
+    const rig = [
+      unit('a', vec3(-2, -2, 6), vec3(-1, 2, 1.6)),
+      unit('b', vec3(2, -2, 6), vec3(1, 2, 1.6)),
+      unit('c', vec3(0, 8, 6), vec3(0, 4, 1.6)),
+    ];
     const engine = createCoverageEngine(coarse);
     engine.update(rig);
     engine.update([rig[0], unit('b', vec3(2, -2, 6), vec3(1.5, 2, 1.6)), rig[2]]);
@@ -169,7 +231,10 @@ describe('culled and incremental results equal the brute-force reference', () =>
   });
 
   it('a copy of the rig with equal values recomputes nothing; a changed field deep inside recomputes that unit', () => {
-    const rig = [unit('a', vec3(-2, -2, 6), vec3(-1, 2, 1.6)), unit('b', vec3(2, -2, 6), vec3(1, 2, 1.6), 30000, 19, 30)];
+    const rig = [
+      unit('a', vec3(-2, -2, 6), vec3(-1, 2, 1.6)),
+      unit('b', vec3(2, -2, 6), vec3(1, 2, 1.6), 30000, 19, 30),
+    ];
     const engine = createCoverageEngine(coarse);
     const before = Float64Array.from(engine.update(rig).values);
     // As the worker receives them: new objects, the same values.

@@ -1,5 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { type CoverageRequest, type RigFixture, createCoverageService, gridOver, isoluxLines, niceLevels } from '@/lib/analysis';
+import {
+  type CoverageRequest,
+  type RigFixture,
+  createCoverageService,
+  gridOver,
+  isoluxLines,
+  niceLevels,
+} from '@/lib/analysis';
 import { vec3 } from '@/lib/geometry';
 
 describe('isolux lines', () => {
@@ -39,9 +46,16 @@ describe('the coverage service', () => {
     { x: minX, y: minY + size },
   ];
   const request: CoverageRequest = {
-    spec: { grid: gridOver({ minX: -4, maxX: 4, minY: 0, maxY: 4 }, 0.1), plane: { kind: 'horizontal', heightM: 1.6 } },
+    spec: {
+      grid: gridOver({ minX: -4, maxX: 4, minY: 0, maxY: 4 }, 0.1),
+      plane: { kind: 'horizontal', heightM: 1.6 },
+    },
     fixtures: [unit],
-    stage: { id: 'stage', name: 'Whole stage', outline: square(-4, 0, 8).map((point) => ({ x: point.x, y: point.y / 2 })) },
+    stage: {
+      id: 'stage',
+      name: 'Whole stage',
+      outline: square(-4, 0, 8).map((point) => ({ x: point.x, y: point.y / 2 })),
+    },
     areas: [
       { id: 'centre', name: 'Centre', outline: square(-0.5, 1.5, 1) },
       { id: 'edge', name: 'Edge', outline: square(3, 0, 1) },
@@ -71,7 +85,10 @@ describe('the coverage service', () => {
     service.handle(request);
     const moved = service.handle({ ...request, fixtures: [{ ...unit, focus: vec3(0.5, 2, 1.6) }] });
     expect(moved.recomputed).toBe(1);
-    const fresh = createCoverageService().handle({ ...request, fixtures: [{ ...unit, focus: vec3(0.5, 2, 1.6) }] });
+    const fresh = createCoverageService().handle({
+      ...request,
+      fixtures: [{ ...unit, focus: vec3(0.5, 2, 1.6) }],
+    });
     for (let index = 0; index < fresh.values.length; index += 97) {
       expect(moved.values[index]).toBeCloseTo(fresh.values[index], 9);
     }

@@ -19,8 +19,14 @@ import {
 import { vec3 } from '@/lib/geometry';
 import { seededRandom } from '@/lib/seededRandom';
 
-const horizontal: CoverageSpec = { grid: gridOver({ minX: -6, maxX: 6, minY: -1, maxY: 7 }, 0.2), plane: { kind: 'horizontal', heightM: 1.6 } };
-const faces: CoverageSpec = { grid: horizontal.grid, plane: { kind: 'toward', heightM: 1.6, viewpoint: vec3(0, -9, 1.6) } };
+const horizontal: CoverageSpec = {
+  grid: gridOver({ minX: -6, maxX: 6, minY: -1, maxY: 7 }, 0.2),
+  plane: { kind: 'horizontal', heightM: 1.6 },
+};
+const faces: CoverageSpec = {
+  grid: horizontal.grid,
+  plane: { kind: 'toward', heightM: 1.6, viewpoint: vec3(0, -9, 1.6) },
+};
 
 /** An invented mixed rig: round and oval beams from above, a low unit, and a soft box near the grid. */
 function mixedRig(count: number, seed: number): RigFixture[] {
@@ -31,11 +37,23 @@ function mixedRig(count: number, seed: number): RigFixture[] {
     const beam = 10 + 40 * next();
     const spread =
       index % 5 === 4
-        ? { kind: 'oval' as const, beamAngleXDeg: beam, fieldAngleXDeg: beam * 1.5, beamAngleYDeg: beam * 0.6, fieldAngleYDeg: beam * 0.9, rotationDeg: 30 }
+        ? {
+            kind: 'oval' as const,
+            beamAngleXDeg: beam,
+            fieldAngleXDeg: beam * 1.5,
+            beamAngleYDeg: beam * 0.6,
+            fieldAngleYDeg: beam * 0.9,
+            rotationDeg: 30,
+          }
         : { kind: 'round' as const, beamAngleDeg: beam, fieldAngleDeg: beam * 1.6 };
     return { id: `u${index}`, mount, focus, source: { kind: 'beam', spread, peakCd: 5000 + 60000 * next() } };
   });
-  rig.push({ id: 'soft', mount: vec3(2, 1, 2.2), focus: vec3(0, 2, 1.6), source: { kind: 'soft', shape: { kind: 'rectangle', widthM: 0.6, heightM: 0.9 }, luminanceCdPerM2: 3000 } });
+  rig.push({
+    id: 'soft',
+    mount: vec3(2, 1, 2.2),
+    focus: vec3(0, 2, 1.6),
+    source: { kind: 'soft', shape: { kind: 'rectangle', widthM: 0.6, heightM: 0.9 }, luminanceCdPerM2: 3000 },
+  });
   return rig;
 }
 
@@ -52,11 +70,15 @@ function localHelpers(count: number, calls: { count: number } = { count: 0 }): S
   });
 }
 
-function expectIdentical(a: { values: Float64Array; overlaps: Uint16Array }, b: { values: Float64Array; overlaps: Uint16Array }) {
+function expectIdentical(
+  a: { values: Float64Array; overlaps: Uint16Array },
+  b: { values: Float64Array; overlaps: Uint16Array },
+) {
   expect(a.values.length).toBe(b.values.length);
   let differing = 0;
   for (let index = 0; index < a.values.length; index += 1) {
-    if (!Object.is(a.values[index], b.values[index]) || a.overlaps[index] !== b.overlaps[index]) differing += 1;
+    if (!Object.is(a.values[index], b.values[index]) || a.overlaps[index] !== b.overlaps[index])
+      differing += 1;
   }
   expect(differing).toBe(0);
 }
@@ -76,9 +98,12 @@ describe('rows dealt out in turn', () => {
       const rig = mixedRig(24, 11);
       const whole = createCoverageEngine(spec).update(rig);
       for (const every of [2, 3]) {
-        const joined = { values: new Float64Array(whole.values.length), overlaps: new Uint16Array(whole.overlaps.length) };
+        const joined = {
+          values: new Float64Array(whole.values.length),
+          overlaps: new Uint16Array(whole.overlaps.length),
+        };
         for (let from = 0; from < every; from += 1) {
-          const part = createCoverageEngine(spec, { every, from }).update(rig);
+          const part = createCoverageEngine(spec, { share: { every, from } }).update(rig);
           for (let row = 0; row < spec.grid.rows; row += 1) {
             for (let column = 0; column < spec.grid.columns; column += 1) {
               const index = row * spec.grid.columns + column;
@@ -119,13 +144,19 @@ describe('a full recompute shared with helpers', () => {
     single.update(rig);
     expect(calls.count).toBe(1);
     // One unit moved: recomputed here, helpers not asked.
-    const moved = rig.map((fixture, index) => (index === 2 ? { ...fixture, focus: vec3(fixture.focus.x + 0.7, fixture.focus.y, 1.6) } : fixture));
+    const moved = rig.map((fixture, index) =>
+      index === 2 ? { ...fixture, focus: vec3(fixture.focus.x + 0.7, fixture.focus.y, 1.6) } : fixture,
+    );
     expectIdentical(await shared.updateSharing(moved, helpers, { shareFromMs: 0 }), single.update(moved));
     expect(calls.count).toBe(1);
     expect(shared.lastThreads()).toBe(1);
     expect(shared.lastRecomputed()).toBe(1);
     // Every level changed (a master fader): shared again.
-    const dimmed = moved.map((fixture) => (fixture.source.kind === 'beam' ? { ...fixture, source: { ...fixture.source, peakCd: fixture.source.peakCd * 0.8 } } : fixture));
+    const dimmed = moved.map((fixture) =>
+      fixture.source.kind === 'beam'
+        ? { ...fixture, source: { ...fixture.source, peakCd: fixture.source.peakCd * 0.8 } }
+        : fixture,
+    );
     expectIdentical(await shared.updateSharing(dimmed, helpers, { shareFromMs: 0 }), single.update(dimmed));
     expect(calls.count).toBe(2);
   });
@@ -133,7 +164,10 @@ describe('a full recompute shared with helpers', () => {
   it('a helper that fails or answers the wrong size costs time, not the map', async () => {
     const rig = mixedRig(16, 3);
     const failing: ShareHelper = () => Promise.reject(new Error('worker gone'));
-    const wrongSize: ShareHelper = async () => ({ values: new Float64Array(3), overlaps: new Uint16Array(3) });
+    const wrongSize: ShareHelper = async () => ({
+      values: new Float64Array(3),
+      overlaps: new Uint16Array(3),
+    });
     const engine = createCoverageEngine(horizontal);
     const grid = await engine.updateSharing(rig, [failing, wrongSize], { shareFromMs: 0 });
     expectIdentical(grid, createCoverageEngine(horizontal).update(rig));
@@ -150,7 +184,12 @@ describe('a full recompute shared with helpers', () => {
     await large.updateSharing(mixedRig(120, 2), helpers);
     expect(large.lastThreads()).toBe(2);
     // Once timed, the threshold decides (0: always; beyond any real time: never).
-    const dim = (rig: RigFixture[]) => rig.map((fixture) => (fixture.source.kind === 'beam' ? { ...fixture, source: { ...fixture.source, peakCd: fixture.source.peakCd / 2 } } : fixture));
+    const dim = (rig: RigFixture[]) =>
+      rig.map((fixture) =>
+        fixture.source.kind === 'beam'
+          ? { ...fixture, source: { ...fixture.source, peakCd: fixture.source.peakCd / 2 } }
+          : fixture,
+      );
     await small.updateSharing(dim(mixedRig(20, 2)), helpers, { shareFromMs: 0 });
     expect(small.lastThreads()).toBe(2);
     await large.updateSharing(dim(mixedRig(120, 2)), helpers, { shareFromMs: 1e9 });
@@ -174,10 +213,15 @@ describe('helpers over message ports', () => {
     const helper = shareHelperOverPort(channel.port1 as unknown as SharePort);
     const rig = mixedRig(12, 21);
     const engine = createCoverageEngine(horizontal);
-    expectIdentical(await engine.updateSharing(rig, [helper], { shareFromMs: 0 }), createCoverageEngine(horizontal).update(rig));
+    expectIdentical(
+      await engine.updateSharing(rig, [helper], { shareFromMs: 0 }),
+      createCoverageEngine(horizontal).update(rig),
+    );
     expect(engine.lastThreads()).toBe(2);
     // A request the helper cannot read (no fixture list).
-    await expect(helper({ spec: horizontal, share: { every: 2, from: 1 }, fixtures: null as unknown as RigFixture[] })).rejects.toThrow(/light map helper/);
+    await expect(
+      helper({ spec: horizontal, share: { every: 2, from: 1 }, fixtures: null as unknown as RigFixture[] }),
+    ).rejects.toThrow(/light map helper/);
     channel.port1.close();
   });
 
@@ -190,7 +234,11 @@ describe('helpers over message ports', () => {
     try {
       const rig = mixedRig(12, 4);
       const engine = createCoverageEngine(horizontal);
-      const grid = await engine.updateSharing(rig, [shareHelperOverPort(channel.port1 as unknown as SharePort)], { shareFromMs: 0 });
+      const grid = await engine.updateSharing(
+        rig,
+        [shareHelperOverPort(channel.port1 as unknown as SharePort)],
+        { shareFromMs: 0 },
+      );
       expectIdentical(grid, createCoverageEngine(horizontal).update(rig));
       expect(engine.lastThreads()).toBe(2);
     } finally {
@@ -205,13 +253,36 @@ describe('the shared coverage service', () => {
     const request: CoverageRequest = {
       spec: horizontal,
       fixtures: mixedRig(18, 9),
-      stage: { id: 'stage', name: 'Whole stage', outline: [{ x: -6, y: -1 }, { x: 6, y: -1 }, { x: 6, y: 7 }, { x: -6, y: 7 }] },
-      areas: [{ id: 'dsc', name: 'Down centre', outline: [{ x: -2, y: 0 }, { x: 2, y: 0 }, { x: 2, y: 3 }, { x: -2, y: 3 }] }],
+      stage: {
+        id: 'stage',
+        name: 'Whole stage',
+        outline: [
+          { x: -6, y: -1 },
+          { x: 6, y: -1 },
+          { x: 6, y: 7 },
+          { x: -6, y: 7 },
+        ],
+      },
+      areas: [
+        {
+          id: 'dsc',
+          name: 'Down centre',
+          outline: [
+            { x: -2, y: 0 },
+            { x: 2, y: 0 },
+            { x: 2, y: 3 },
+            { x: -2, y: 3 },
+          ],
+        },
+      ],
       band: { targetLx: 500, toleranceStops: 0.5 },
       rules: { hotStops: 1, darkStops: 1, maxOverlaps: 3, minimumAreaM2: 0.1 },
     };
     const shared = createSharedCoverageService(localHelpers(1), { shareFromMs: 0 });
-    const [first, second] = await Promise.all([shared.handle(request), shared.handle({ ...request, fixtures: request.fixtures.slice(1) })]);
+    const [first, second] = await Promise.all([
+      shared.handle(request),
+      shared.handle({ ...request, fixtures: request.fixtures.slice(1) }),
+    ]);
     const expectedFirst = createCoverageService().handle(request);
     expect(first.values).toEqual(expectedFirst.values);
     expect(first.statistics).toEqual(expectedFirst.statistics);
@@ -223,6 +294,8 @@ describe('the shared coverage service', () => {
     expect(second.recomputed).toBe(1);
     const oneThread = createCoverageService();
     oneThread.handle(request);
-    expect(second.values).toEqual(oneThread.handle({ ...request, fixtures: request.fixtures.slice(1) }).values);
+    expect(second.values).toEqual(
+      oneThread.handle({ ...request, fixtures: request.fixtures.slice(1) }).values,
+    );
   });
 });

@@ -1,11 +1,21 @@
 import { describe, expect, it } from 'vitest';
-import { type CoverageSpec, type RigFixture, areaStatistics, findRegions, gridOver, polygonMask } from '@/lib/analysis';
+import {
+  type CoverageSpec,
+  type RigFixture,
+  areaStatistics,
+  findRegions,
+  gridOver,
+  polygonMask,
+} from '@/lib/analysis';
 import { vec3 } from '@/lib/geometry';
 
 describe('area statistics', () => {
   // REFERENCE-CHECKS §9 [DER]: grid {300, 400, 500, 400} → Ē 400, U0 = 0.75, Emin/Emax = 0.60.
   it('the reference grid {300, 400, 500, 400} lx has Ē 400 lx, U0 0.75, Emin/Emax 0.60', () => {
-    const stats = areaStatistics(new Float64Array([300, 400, 500, 400]), null, { targetLx: 400, toleranceStops: 0.5 });
+    const stats = areaStatistics(new Float64Array([300, 400, 500, 400]), null, {
+      targetLx: 400,
+      toleranceStops: 0.5,
+    });
     expect(stats).toMatchObject({ cells: 4, minLx: 300, averageLx: 400, maxLx: 500 });
     expect(stats?.uniformityMinToAverage).toBeCloseTo(0.75, 12);
     expect(stats?.uniformityMinToMax).toBeCloseTo(0.6, 12);
@@ -23,11 +33,16 @@ describe('area statistics', () => {
     expect(stats?.uniformityMinToAverage).toBeCloseTo(0.4285714, 6);
     expect(stats?.uniformityMinToMax).toBe(0.25);
     expect(stats?.withinTarget).toBe(1);
-    expect(areaStatistics(values, null, { targetLx: 200, toleranceStops: 0.5 })?.withinTarget).toBeCloseTo(1 / 9, 12);
+    expect(areaStatistics(values, null, { targetLx: 200, toleranceStops: 0.5 })?.withinTarget).toBeCloseTo(
+      1 / 9,
+      12,
+    );
   });
 
   it('an empty mask gives no statistics rather than NaN', () => {
-    expect(areaStatistics(new Float64Array([1, 2]), new Uint8Array([0, 0]), { targetLx: 100, toleranceStops: 1 })).toBeNull();
+    expect(
+      areaStatistics(new Float64Array([1, 2]), new Uint8Array([0, 0]), { targetLx: 100, toleranceStops: 1 }),
+    ).toBeNull();
   });
 
   it('masks cells whose centres fall inside a polygon', () => {
@@ -45,7 +60,10 @@ describe('area statistics', () => {
 describe('hot spots and dark gaps on crafted maps', () => {
   // A 10 × 6 grid of 1 m cells at 400 lx, with a 2 × 2 block at 1600 lx (+2 stops), a 3-cell strip at
   // 50 lx (−3 stops) and one lone dim cell too small to report.
-  const spec: CoverageSpec = { grid: gridOver({ minX: 0, maxX: 10, minY: 0, maxY: 6 }, 1), plane: { kind: 'horizontal', heightM: 1.6 } };
+  const spec: CoverageSpec = {
+    grid: gridOver({ minX: 0, maxX: 10, minY: 0, maxY: 6 }, 1),
+    plane: { kind: 'horizontal', heightM: 1.6 },
+  };
   const values = new Float64Array(60).fill(400);
   for (const index of [12, 13, 22, 23]) values[index] = 1600;
   for (const index of [47, 48, 49]) values[index] = 50;
@@ -77,7 +95,14 @@ describe('hot spots and dark gaps on crafted maps', () => {
   it('flags beams piling up even when the level is in range', () => {
     const piled = new Uint16Array(60);
     for (const index of [30, 31, 32]) piled[index] = 5;
-    const regions = findRegions({ spec, values: new Float64Array(60).fill(400), overlaps: piled, mask: null, rules, fixtures: [] });
+    const regions = findRegions({
+      spec,
+      values: new Float64Array(60).fill(400),
+      overlaps: piled,
+      mask: null,
+      rules,
+      fixtures: [],
+    });
     expect(regions).toHaveLength(1);
     expect(regions[0]).toMatchObject({ kind: 'hot', reason: 'beams pile up', areaM2: 3 });
   });

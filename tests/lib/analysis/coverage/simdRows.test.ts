@@ -1,0 +1,183 @@
+import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
+import {
+  type CoverageSpec,
+  type RigFixture,
+  LIGHT_ROWS_WASM_BASE64,
+  accumulateRound,
+  bruteForceCoverage,
+  cellNormals,
+  createCoverageEngine,
+  gridOver,
+  prepareSource,
+  simdRowsAvailable,
+  withSimdRows,
+} from '@/lib/analysis';
+import { vec3 } from '@/lib/geometry';
+import { assembleLightRows } from '../../../../scripts/build-wasm.mjs';
+
+const spec: CoverageSpec = {
+  grid: gridOver({ minX: -6, maxX: 6.1, minY: -1, maxY: 7 }, 0.1),
+  plane: { kind: 'horizontal', heightM: 1.6 },
+};
+
+function unit(
+  id: string,
+  mount: ReturnType<typeof vec3>,
+  focus: ReturnType<typeof vec3>,
+  beam: number,
+  field: number,
+  peakCd = 30000,
+): RigFixture {
+  return {
+    id,
+    mount,
+    focus,
+    source: { kind: 'beam', spread: { kind: 'round', beamAngleDeg: beam, fieldAngleDeg: field }, peakCd },
+  };
+}
+
+/** Every cell the same number, the same sign of zero included, and the same beam-angle counts. */
+function expectSameBits(
+  a: { values: Float64Array; overlaps: Uint16Array },
+  b: { values: Float64Array; overlaps: Uint16Array },
+) {
+  let differing = 0;
+  for (let index = 0; index < a.values.length; index += 1) {
+    if (!Object.is(a.values[index], b.values[index]) || a.overlaps[index] !== b.overlaps[index])
+      differing += 1;
+  }
+  expect(differing).toBe(0);
+}
+
+describe('the WebAssembly SIMD loop', () => {
+  it('is the assembled lightRows.wat (npm run wasm keeps them together)', async () => {
+    const assembled: Buffer = await assembleLightRows();
+    expect(Buffer.from(LIGHT_ROWS_WASM_BASE64, 'base64').equals(assembled)).toBe(true);
+  });
+
+  it('runs here (Node has WebAssembly SIMD), so the comparisons below compare two loops', () => {
+    expect(simdRowsAvailable()).toBe(true);
+    expect(createCoverageEngine(spec).simd).toBe(true);
+    expect(createCoverageEngine(spec, { simd: false }).simd).toBe(false);
+    // Faces toward a viewpoint have no plane lit from above: the JavaScript loop serves them.
+    expect(
+      createCoverageEngine({ ...spec, plane: { kind: 'toward', heightM: 1.6, viewpoint: vec3(0, -9, 1.6) } })
+        .simd,
+    ).toBe(false);
+  });
+
+  it('gives the same bits as the JavaScript loop: narrow, wide, near-axis and grid-edge beams', () => {
+    const rig = [
+      // Straight down: every near-axis path (fine table, closed form for field/beam > 1.82).
+      unit('down', vec3(0.05, 3.05, 6), vec3(0.05, 3.05, 1.6), 19, 40),
+      unit('narrow', vec3(-2, -3, 7), vec3(-1, 2, 1.6), 4, 6),
+      unit('soft-edged', vec3(2, -3, 7), vec3(2.5, 3, 1.6), 30, 90),
+      // Lighting the last column (odd count: 121) and the grid's last cell.
+      unit('corner', vec3(5.9, 6.8, 5), vec3(6.05, 6.95, 1.6), 40, 60),
+      unit('wide', vec3(0, 9, 3), vec3(-4, 0, 1.6), 50, 115),
+    ];
+    expect(spec.grid.columns % 2).toBe(1);
+    const js = createCoverageEngine(spec, { simd: false }).update(rig);
+    const simd = createCoverageEngine(spec).update(rig);
+    expectSameBits(simd, js);
+    expect(simd.values[simd.values.length - 1]).toBeGreaterThan(0);
+  });
+
+  it('gives the same bits as the JavaScript loop on random rigs, and stays within 1e-9 of the reference', () => {
+    const coarse: CoverageSpec = {
+      grid: gridOver({ minX: -6, maxX: 6, minY: -1, maxY: 7 }, 0.25),
+      plane: { kind: 'horizontal', heightM: 1.6 },
+    };
+    const arbitraryUnit = fc.record({
+      mx: fc.double({ min: -7, max: 7, noNaN: true }),
+      my: fc.double({ min: -3, max: 9, noNaN: true }),
+      mz: fc.double({ min: 2, max: 12, noNaN: true }),
+      fx: fc.double({ min: -6, max: 6, noNaN: true }),
+      fy: fc.double({ min: -1, max: 7, noNaN: true }),
+      beam: fc.double({ min: 2, max: 70, noNaN: true }),
+      ratio: fc.double({ min: 1.1, max: 2.5, noNaN: true }),
+    });
+    fc.assert(
+      fc.property(fc.array(arbitraryUnit, { minLength: 1, maxLength: 10 }), (values) => {
+        const rig = values.map((value, index) =>
+          unit(
+            `u${index}`,
+            vec3(value.mx, value.my, value.mz),
+            vec3(value.fx, value.fy, 1.6),
+            value.beam,
+            Math.min(value.beam * value.ratio, 170),
+          ),
+        );
+        for (const grid of [spec, coarse]) {
+          const simd = createCoverageEngine(grid).update(rig);
+          expectSameBits(simd, createCoverageEngine(grid, { simd: false }).update(rig));
+        }
+        const reference = bruteForceCoverage(coarse, rig);
+        const simd = createCoverageEngine(coarse).update(rig);
+        for (let index = 0; index < simd.values.length; index += 1) {
+          if (reference.values[index] > 0.1)
+            expect(
+              Math.abs(simd.values[index] - reference.values[index]) / reference.values[index],
+            ).toBeLessThanOrEqual(1e-9);
+        }
+      }),
+      { numRuns: 30 },
+    );
+  }, 120_000);
+
+  it('keeps working when its tables no longer fit (dropped and loaded again) and when the grid changes size', () => {
+    const small: CoverageSpec = {
+      grid: gridOver({ minX: -3, maxX: 3, minY: 0, maxY: 4 }, 0.1),
+      plane: spec.plane,
+    };
+    const normals = cellNormals(spec);
+    const smallNormals = cellNormals(small);
+    // Ten beam types, batches of two, a table area too small for more than two at once.
+    for (let step = 0; step < 10; step += 1) {
+      for (const [grid, cellsNormals] of [
+        [spec, normals],
+        [small, smallNormals],
+      ] as const) {
+        const beams = [0, 1].map((offset) =>
+          prepareSource(
+            unit(
+              `b${step}`,
+              vec3(-1 + offset, 1, 6),
+              vec3(offset, 2, 1.6),
+              10 + step * 3 + offset,
+              18 + step * 5,
+            ),
+            grid,
+          ),
+        );
+        const expected = {
+          values: new Float64Array(grid.grid.columns * grid.grid.rows),
+          overlaps: new Uint16Array(grid.grid.columns * grid.grid.rows),
+        };
+        for (const beam of beams)
+          if (beam.kind === 'round') accumulateRound(beam, grid, cellsNormals, expected, 1);
+        const values = new Float64Array(expected.values.length);
+        const overlaps = new Uint16Array(expected.values.length);
+        const tables = beams.flatMap((beam) => (beam.kind === 'round' ? [beam.table] : []));
+        let used = 0;
+        withSimdRows(
+          values,
+          grid.grid.rows,
+          tables,
+          (batch) => {
+            expect(batch).not.toBeNull();
+            for (const beam of beams) {
+              if (beam.kind !== 'round') continue;
+              if (batch?.tableAddress(beam.table) !== undefined) used += 1;
+              accumulateRound(beam, grid, cellsNormals, { values: batch!.values, overlaps, simd: batch }, 1);
+            }
+          },
+          2 * 200_000,
+        );
+        expect(used).toBe(2);
+        expectSameBits({ values, overlaps }, expected);
+      }
+    }
+  });
+});
