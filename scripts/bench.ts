@@ -211,7 +211,7 @@ async function coverageBenchmarks(): Promise<void> {
       incrementalClonedRigMedianMs: incrementalCloned.wallMs,
       incrementalSharedPathMedianMs: round3(median(sharedSteps)),
       threads,
-      simd: engine.simd,
+      simd: engine.usesSimd(),
       fullRecomputeSharedMedianMs: sharedMs,
       fullRecomputeOneThreadInTurnMedianMs: oneThreadMs,
       fullRecomputeJavaScriptLoopInTurnMedianMs: scalarMs,

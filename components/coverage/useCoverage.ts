@@ -33,25 +33,28 @@ export function useCoverage(request: CoverageRequest | string | null): {
   const busy = useRef(false);
   const waiting = useRef<CoverageRequest | null>(null);
   const sequence = useRef(0);
+  const sendRequest = useRef<((request: CoverageRequest) => void) | null>(null);
 
   useEffect(() => {
     if (typeof Worker === 'undefined') return;
     const instance = new Worker(new URL('./coverage.worker.ts', import.meta.url));
     worker.current = instance;
     // Helpers for full recomputes, one per further core (at most three), each joined to the worker by a
-    // channel of its own.
-    const helpers = Array.from(
-      { length: helperCount() },
-      () => new Worker(new URL('./coverageShare.worker.ts', import.meta.url)),
-    );
-    if (helpers.length > 0) {
+    // channel of its own; started with the first request, so an editor that never shows the map has none.
+    const helpers: Worker[] = [];
+    let helpersStarted = false;
+    const startHelpers = () => {
+      helpersStarted = true;
+      for (let index = 0; index < helperCount(); index += 1)
+        helpers.push(new Worker(new URL('./coverageShare.worker.ts', import.meta.url)));
+      if (helpers.length === 0) return;
       const ports = helpers.map((helper) => {
         const channel = new MessageChannel();
         helper.postMessage({ port: channel.port2 }, [channel.port2]);
         return channel.port1;
       });
       instance.postMessage({ helpers: ports }, ports);
-    }
+    };
     instance.onmessage = (
       event: MessageEvent<{ sequence: number; response?: CoverageResponse; error?: string }>,
     ) => {
@@ -66,14 +69,17 @@ export function useCoverage(request: CoverageRequest | string | null): {
       if (next) send(next);
     };
     const send = (next: CoverageRequest) => {
+      if (!helpersStarted) startHelpers();
       busy.current = true;
       sequence.current += 1;
       instance.postMessage({ sequence: sequence.current, request: next });
     };
+    sendRequest.current = send;
     return () => {
       instance.terminate();
       for (const helper of helpers) helper.terminate();
       worker.current = null;
+      sendRequest.current = null;
     };
   }, []);
 
@@ -96,9 +102,7 @@ export function useCoverage(request: CoverageRequest | string | null): {
       waiting.current = request;
       return;
     }
-    busy.current = true;
-    sequence.current += 1;
-    worker.current.postMessage({ sequence: sequence.current, request });
+    sendRequest.current?.(request);
   }, [request]);
 
   // A request that could not be made (a message instead) is shown as it is.

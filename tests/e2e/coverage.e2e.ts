@@ -137,14 +137,22 @@ describe('a large rig', () => {
     // is shared out with one helper per core beyond the first, at most three (useCoverage.ts).
     await page.getByLabel('Surface').selectOption('toward');
     const cores = await page.evaluate(() => navigator.hardwareConcurrency || 1);
-    await expect
-      .poll(async () => Number(await timing.getAttribute('data-threads')), { timeout: 15000 })
-      .toBe(Math.min(4, Math.max(1, cores)));
-    expect(await timing.textContent()).toContain('252 units recomputed');
+    const threadsAndSimd = async () =>
+      `${await timing.getAttribute('data-threads')} ${await timing.getAttribute('data-simd')}`;
+    // Faces use the JavaScript loop (data-simd false), which tells this answer from the plane's.
+    await expect.poll(threadsAndSimd, { timeout: 15000 }).toBe(`${Math.min(4, Math.max(1, cores))} false`);
     const expected = expectedStatistics(demo, { plane: 'toward' });
     const shown = await shownAverages(page);
     for (const row of expected)
       expect(shown.get(row.id)).toBeCloseTo(row.figures?.averageLx ?? Number.NaN, 6);
+
+    // Back to the horizontal plane: shared again, and this worker and its helpers ran the SIMD loop.
+    await page.getByLabel('Surface').selectOption('horizontal');
+    await expect.poll(threadsAndSimd, { timeout: 15000 }).toBe(`${Math.min(4, Math.max(1, cores))} true`);
+    const shownAgain = await shownAverages(page);
+    for (const row of expectedStatistics(demo))
+      expect(shownAgain.get(row.id)).toBeCloseTo(row.figures?.averageLx ?? Number.NaN, 6);
+    await timing.scrollIntoViewIfNeeded();
     await page.screenshot({ path: path.join(artifactsDir, 'light-map-large-rig.png') });
     expect(problems.pageErrors).toEqual([]);
     expect(problems.consoleErrors).toEqual([]);

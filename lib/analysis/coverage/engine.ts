@@ -30,6 +30,32 @@ export const SHARE_FROM_MS = 4;
 /** Before any full recompute has been timed, rigs of this many units or more are shared out. */
 export const SHARE_FROM_UNITS = 100;
 
+/** The least time a helper is given to answer after this thread has done its part (ms). */
+export const HELPER_GRACE_MS = 2000;
+
+/** Helpers that failed or did not answer in time: not asked again (by any engine). */
+const failedHelpers = new WeakSet<ShareHelper>();
+
+/** Settle every promise, rejecting those still pending after `ms`. */
+async function settleWithin<T>(
+  promises: readonly Promise<T>[],
+  ms: number,
+): Promise<PromiseSettledResult<T>[]> {
+  const timers: ReturnType<typeof setTimeout>[] = [];
+  const bounded = promises.map(
+    (promise) =>
+      new Promise<T>((resolve, reject) => {
+        timers.push(setTimeout(() => reject(new Error(`no answer within ${Math.round(ms)} ms`)), ms));
+        promise.then(resolve, reject);
+      }),
+  );
+  try {
+    return await Promise.allSettled(bounded);
+  } finally {
+    for (const timer of timers) clearTimeout(timer);
+  }
+}
+
 export interface CoverageEngine {
   readonly spec: CoverageSpec;
   /**
@@ -48,14 +74,17 @@ export interface CoverageEngine {
   updateSharing(
     fixtures: readonly RigFixture[],
     helpers: readonly ShareHelper[],
-    options?: { readonly shareFromMs?: number },
+    options?: { readonly shareFromMs?: number; readonly helperGraceMs?: number },
   ): Promise<CoverageGrid>;
   /** How many fixtures the last update had to (re)compute. */
   lastRecomputed(): number;
   /** How many threads computed the last update (1, or 1 + helpers when it was shared out). */
   lastThreads(): number;
-  /** Whether full recomputes run the round beams' inner loop in WebAssembly SIMD (simdRows.ts). */
-  readonly simd: boolean;
+  /**
+   * Whether full recomputes run the round beams' inner loop in WebAssembly SIMD (simdRows.ts), here and
+   * (as they reported at the last shared update) on the helpers.
+   */
+  usesSimd(): boolean;
 }
 
 /**
@@ -98,7 +127,7 @@ export interface CoverageEngineOptions {
 
 /**
  * A fresh engine for one grid and plane. With a `share`, it computes only those rows (the others stay
- * 0): parts of one grid computed on different threads (sharedEngine.ts) are put together row by row.
+ * 0): parts of one grid computed on different threads (sharing.ts) are put together row by row.
  */
 export function createCoverageEngine(
   spec: CoverageSpec,
@@ -121,6 +150,18 @@ export function createCoverageEngine(
   let sharing = false;
   // How long the last full recompute took, or would have taken, on one thread (ms); null before the first.
   let fullMs: number | null = null;
+  // Whether every helper of the last shared update ran the SIMD loop too.
+  let helpersSimd = true;
+
+  /** Run a change of the grid; if it throws, the grid is unfinished, so the next update starts again. */
+  const keepingStateSafe = (change: () => CoverageGrid): CoverageGrid => {
+    try {
+      return change();
+    } catch (error) {
+      current = new Map();
+      throw error;
+    }
+  };
 
   /** The entries for `fixtures` and the changes since the last update (prepared sources to take away and add). */
   const plan = (fixtures: readonly RigFixture[]) => {
@@ -175,55 +216,73 @@ export function createCoverageEngine(
 
   return {
     spec,
-    simd,
+    usesSimd: () => simd && helpersSimd,
     update(fixtures, options) {
       const { next, changes, restart: startAgain } = plan(fixtures);
-      if (startAgain || options?.restart) restart(next, share);
-      else incremental(changes);
-      recomputed = startAgain || options?.restart ? next.size : changes.length;
-      threads = 1;
-      current = next;
-      return grid;
+      return keepingStateSafe(() => {
+        if (startAgain || options?.restart) restart(next, share);
+        else incremental(changes);
+        recomputed = startAgain || options?.restart ? next.size : changes.length;
+        threads = 1;
+        current = next;
+        return grid;
+      });
     },
     async updateSharing(fixtures, helpers, options) {
       const { next, changes, restart: startAgain } = plan(fixtures);
       const expectedMs = fullMs ?? (next.size >= SHARE_FROM_UNITS ? Infinity : 0);
       const worthSharing = expectedMs >= (options?.shareFromMs ?? SHARE_FROM_MS);
-      if (!startAgain || helpers.length === 0 || share.every !== 1 || !worthSharing) {
-        if (startAgain) restart(next, share);
-        else incremental(changes);
-        recomputed = startAgain ? next.size : changes.length;
-        threads = 1;
-        current = next;
-        return grid;
+      const working = helpers.filter((helper) => !failedHelpers.has(helper));
+      if (!startAgain || working.length === 0 || share.every !== 1 || !worthSharing) {
+        return keepingStateSafe(() => {
+          if (startAgain) restart(next, share);
+          else incremental(changes);
+          recomputed = startAgain ? next.size : changes.length;
+          threads = 1;
+          current = next;
+          return grid;
+        });
       }
       // Rows dealt out in turn: part 0 here, part k to helper k, asked first so that they work meanwhile.
-      const every = helpers.length + 1;
+      const every = working.length + 1;
       const shareOf = (index: number): RowShare => ({ every, from: index + 1 });
-      const parts = helpers.map((helper, index) => helper({ spec, share: shareOf(index), fixtures }));
+      const parts = working.map((helper, index) => helper({ spec, share: shareOf(index), fixtures }));
+      // Failures are read below (or dropped if this thread fails first), never left unhandled.
       for (const part of parts) part.catch(() => undefined);
       sharing = true;
       try {
         const started = performance.now();
         restart(next, { every, from: 0 });
         const ownMs = performance.now() - started;
-        const answers = await Promise.allSettled(parts);
+        // A helper has ten times this thread's time (and at least the grace) to answer; after that it is
+        // taken as gone (its worker crashed or was stopped) and is not asked again.
+        const answers = await settleWithin(
+          parts,
+          Math.max(options?.helperGraceMs ?? HELPER_GRACE_MS, 10 * ownMs),
+        );
+        helpersSimd = true;
         answers.forEach((answer, index) => {
-          if (answer.status === 'fulfilled' && fitsGrid(answer.value, grid))
+          if (answer.status === 'fulfilled' && fitsGrid(answer.value, grid)) {
             copyShareRows(answer.value, grid, shareOf(index));
-          // A helper that failed (a worker gone, say) costs time, never the map: its rows are done here.
-          else
-            for (const entry of next.values())
-              accumulateSource(entry.prepared, spec, normals, grid, 1, shareOf(index));
+            if (answer.value.simd !== true) helpersSimd = false;
+            return;
+          }
+          // A helper that failed, answered wrongly or not in time costs time, never the map: its rows are done here.
+          failedHelpers.add(working[index]);
+          for (const entry of next.values())
+            accumulateSource(entry.prepared, spec, normals, grid, 1, shareOf(index));
         });
         fullMs = ownMs * every;
+        recomputed = next.size;
+        threads = every;
+        current = next;
+        return grid;
+      } catch (error) {
+        current = new Map(); // the grid is unfinished: the next update computes every unit again
+        throw error;
       } finally {
         sharing = false;
       }
-      recomputed = next.size;
-      threads = every;
-      current = next;
-      return grid;
     },
     lastRecomputed: () => recomputed,
     lastThreads: () => threads,

@@ -10,5 +10,5 @@ export * from './isolux';
 export * from './service';
 export * from './sharing';
 export * from './sharePorts';
-export { type SimdBatch, simdRowsAvailable, withSimdRows } from './simdRows';
+export { type SimdBatch, residentTableCount, simdRowsAvailable, withSimdRows } from './simdRows';
 export { LIGHT_ROWS_WASM_BASE64 } from './simd/simdRowsModule';

@@ -192,7 +192,7 @@ function lightRowFromAbove(
     const dx = x0 + column * spacing;
     const inverseDistance = 1 / Math.sqrt(dx * dx + dy2dz2);
     const cosOffAxis = (dx * ax + alongRow) * inverseDistance;
-    if (cosOffAxis <= cosEdge) continue;
+    if (!(cosOffAxis > cosEdge)) continue; // as the SIMD loop tests it (a NaN would get no light in both)
     const position = (1 - cosOffAxis) * positionScale;
     if (position < deferBelow) {
       nearAxisColumns[nearAxisCount] = column;

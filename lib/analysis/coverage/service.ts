@@ -124,7 +124,7 @@ export function createCoverageService(now: () => number = () => performance.now(
         ...describe(request, grid),
         recomputed: engine.lastRecomputed(),
         threads: engine.lastThreads(),
-        simd: engine.simd,
+        simd: engine.usesSimd(),
         elapsedMs: now() - started,
       };
     },
@@ -156,7 +156,7 @@ export function createSharedCoverageService(
       ...describe(request, grid),
       recomputed: engine.lastRecomputed(),
       threads: engine.lastThreads(),
-      simd: engine.simd,
+      simd: engine.usesSimd(),
       elapsedMs: now() - started,
     };
   };

@@ -20,6 +20,8 @@ export interface ShareRequest {
 export interface ShareResult {
   readonly values: Float64Array;
   readonly overlaps: Uint16Array;
+  /** Whether the helper ran the SIMD loop (simdRows.ts). */
+  readonly simd?: boolean;
 }
 
 export type ShareHelper = (request: ShareRequest) => Promise<ShareResult>;
@@ -54,6 +56,10 @@ export function createShareComputer(): (request: ShareRequest) => ShareResult {
       engineKey = key;
     }
     const grid = engine.update(request.fixtures, { restart: true });
-    return { values: Float64Array.from(grid.values), overlaps: Uint16Array.from(grid.overlaps) };
+    return {
+      values: Float64Array.from(grid.values),
+      overlaps: Uint16Array.from(grid.overlaps),
+      simd: engine.usesSimd(),
+    };
   };
 }

@@ -60,6 +60,11 @@ function load(): Loaded | null {
   return loaded;
 }
 
+/** How many profile tables are resident in the module's memory now (for tests of the table area). */
+export function residentTableCount(): number {
+  return resident.size;
+}
+
 /** Whether the SIMD loop can run here. */
 export function simdRowsAvailable(): boolean {
   return load() !== null;
@@ -130,10 +135,14 @@ export function withSimdRows<T>(
     tablesEnd = tablesAt;
     needed.splice(0, needed.length, ...wanted);
   }
-  ensureBytes(
-    loadedModule.memory,
-    tablesEnd + needed.reduce((sum, table) => sum + table.coefficients.byteLength, 0),
-  );
+  try {
+    ensureBytes(
+      loadedModule.memory,
+      tablesEnd + needed.reduce((sum, table) => sum + table.coefficients.byteLength, 0),
+    );
+  } catch {
+    return work(null); // no memory to grow into: the JavaScript loop, on the grid itself
+  }
   // Views only after any growth (growing detaches the old buffer).
   const buffer = loadedModule.memory.buffer;
   for (const table of needed) {

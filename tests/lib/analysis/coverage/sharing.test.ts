@@ -7,6 +7,7 @@ import {
   type RigFixture,
   type ShareHelper,
   type SharePort,
+  bruteForceCoverage,
   createCoverageEngine,
   createCoverageService,
   createShareComputer,
@@ -65,7 +66,15 @@ function localHelpers(count: number, calls: { count: number } = { count: 0 }): S
       calls.count += 1;
       // Through structured cloning, as a message to a worker would be.
       const copy = structuredClone(request);
-      return new Promise((resolve) => setTimeout(() => resolve(compute(copy)), 0));
+      return new Promise((resolve, reject) =>
+        setTimeout(() => {
+          try {
+            resolve(compute(copy));
+          } catch (error) {
+            reject(error as Error);
+          }
+        }, 0),
+      );
     };
   });
 }
@@ -172,6 +181,79 @@ describe('a full recompute shared with helpers', () => {
     const grid = await engine.updateSharing(rig, [failing, wrongSize], { shareFromMs: 0 });
     expectIdentical(grid, createCoverageEngine(horizontal).update(rig));
   });
+
+  it('a helper that never answers is given up after its time and not asked again', async () => {
+    const rig = mixedRig(16, 6);
+    let asked = 0;
+    const silent: ShareHelper = () => {
+      asked += 1;
+      return new Promise(() => undefined); // a worker that crashed or was stopped: no answer, ever
+    };
+    const engine = createCoverageEngine(horizontal);
+    const grid = await engine.updateSharing(rig, [silent], { shareFromMs: 0, helperGraceMs: 50 });
+    expectIdentical(grid, createCoverageEngine(horizontal).update(rig));
+    expect(asked).toBe(1);
+    // Every level changed again: the helper is skipped, the rows all done here.
+    const dimmed = rig.map((fixture) =>
+      fixture.source.kind === 'beam'
+        ? { ...fixture, source: { ...fixture.source, peakCd: fixture.source.peakCd / 3 } }
+        : fixture,
+    );
+    expectIdentical(
+      await engine.updateSharing(dimmed, [silent], { shareFromMs: 0, helperGraceMs: 50 }),
+      createCoverageEngine(horizontal).update(dimmed),
+    );
+    expect(asked).toBe(1);
+    expect(engine.lastThreads()).toBe(1);
+  });
+
+  it('after a recompute that failed half-way, the next update computes every unit again', async () => {
+    const rig = mixedRig(12, 14);
+    // A measured unit without its candela grid: computing its light throws after the grid was cleared.
+    const broken = {
+      id: 'broken',
+      mount: vec3(0, 0, 6),
+      focus: vec3(0, 3, 1.6),
+      source: { kind: 'measured', grid: null, scale: 1 },
+    } as unknown as RigFixture;
+    const dimmed = rig.map((fixture) =>
+      fixture.source.kind === 'beam'
+        ? { ...fixture, source: { ...fixture.source, peakCd: fixture.source.peakCd / 2 } }
+        : fixture,
+    );
+    for (const share of [false, true]) {
+      const engine = createCoverageEngine(horizontal);
+      engine.update(rig);
+      if (share)
+        await expect(
+          engine.updateSharing([...dimmed, broken], localHelpers(1), { shareFromMs: 0 }),
+        ).rejects.toThrow();
+      else expect(() => engine.update([...dimmed, broken])).toThrow();
+      // The same rig as before the failure: not "nothing changed", but computed again.
+      expectIdentical(engine.update(rig), createCoverageEngine(horizontal).update(rig));
+    }
+  });
+
+  it("meets the issue's criterion: within 1e-9 of the brute-force reference on every cell above 0.1 lx", async () => {
+    // Reference: every unit on every cell through the point-source functions (E = I·cos i / d², SI).
+    const coarse: CoverageSpec = {
+      grid: gridOver({ minX: -6, maxX: 6, minY: -1, maxY: 7 }, 0.25),
+      plane: horizontal.plane,
+    };
+    const rig = mixedRig(20, 31);
+    const grid = await createCoverageEngine(coarse).updateSharing(rig, localHelpers(2), { shareFromMs: 0 });
+    const reference = bruteForceCoverage(coarse, rig);
+    let compared = 0;
+    for (let index = 0; index < grid.values.length; index += 1) {
+      if (reference.values[index] <= 0.1) continue;
+      compared += 1;
+      expect(
+        Math.abs(grid.values[index] - reference.values[index]) / reference.values[index],
+      ).toBeLessThanOrEqual(1e-9);
+    }
+    expect(compared).toBeGreaterThan(100);
+    expect(grid.overlaps).toEqual(reference.overlaps);
+  }, 60_000);
 
   it('shares only work worth a message: a large rig at first, then what took long enough on one thread', async () => {
     const calls = { count: 0 };

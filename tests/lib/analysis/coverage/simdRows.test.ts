@@ -1,4 +1,4 @@
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import fc from 'fast-check';
 import {
   type CoverageSpec,
@@ -10,6 +10,7 @@ import {
   createCoverageEngine,
   gridOver,
   prepareSource,
+  residentTableCount,
   simdRowsAvailable,
   withSimdRows,
 } from '@/lib/analysis';
@@ -58,12 +59,14 @@ describe('the WebAssembly SIMD loop', () => {
 
   it('runs here (Node has WebAssembly SIMD), so the comparisons below compare two loops', () => {
     expect(simdRowsAvailable()).toBe(true);
-    expect(createCoverageEngine(spec).simd).toBe(true);
-    expect(createCoverageEngine(spec, { simd: false }).simd).toBe(false);
+    expect(createCoverageEngine(spec).usesSimd()).toBe(true);
+    expect(createCoverageEngine(spec, { simd: false }).usesSimd()).toBe(false);
     // Faces toward a viewpoint have no plane lit from above: the JavaScript loop serves them.
     expect(
-      createCoverageEngine({ ...spec, plane: { kind: 'toward', heightM: 1.6, viewpoint: vec3(0, -9, 1.6) } })
-        .simd,
+      createCoverageEngine({
+        ...spec,
+        plane: { kind: 'toward', heightM: 1.6, viewpoint: vec3(0, -9, 1.6) },
+      }).usesSimd(),
     ).toBe(false);
   });
 
@@ -126,58 +129,103 @@ describe('the WebAssembly SIMD loop', () => {
     );
   }, 120_000);
 
-  it('keeps working when its tables no longer fit (dropped and loaded again) and when the grid changes size', () => {
+  /** Light of `beams` on `grid` through one SIMD batch (table area limit `limit` bytes), and by JavaScript. */
+  function throughBatch(grid: CoverageSpec, beams: ReturnType<typeof prepareSource>[], limit?: number) {
+    const normals = cellNormals(grid);
+    const cells = grid.grid.columns * grid.grid.rows;
+    const expected = { values: new Float64Array(cells), overlaps: new Uint16Array(cells) };
+    const got = { values: new Float64Array(cells), overlaps: new Uint16Array(cells) };
+    const round = beams.flatMap((beam) => (beam.kind === 'round' ? [beam] : []));
+    for (const beam of round) accumulateRound(beam, grid, normals, expected, 1);
+    let usedSimd = 0;
+    withSimdRows(
+      got.values,
+      grid.grid.rows,
+      round.map((beam) => beam.table),
+      (batch) => {
+        if (!batch) throw new Error('no SIMD batch');
+        for (const beam of round) {
+          if (batch.tableAddress(beam.table) !== undefined) usedSimd += 1;
+          accumulateRound(
+            beam,
+            grid,
+            normals,
+            { values: batch.values, overlaps: got.overlaps, simd: batch },
+            1,
+          );
+        }
+      },
+      limit,
+    );
+    expect(usedSimd).toBe(round.length);
+    expectSameBits(got, expected);
+  }
+
+  const beamsOf = (grid: CoverageSpec, first: number, count: number) =>
+    Array.from({ length: count }, (_, index) =>
+      prepareSource(
+        unit(
+          `b${first + index}`,
+          vec3(-1 + index, 1, 6),
+          vec3(index, 2, 1.6),
+          10 + (first + index) * 3,
+          18 + (first + index) * 5,
+        ),
+        grid,
+      ),
+    );
+
+  it('drops its resident tables when a batch would pass the table area limit, and loads its own again', () => {
+    const tableBytes = (beams: ReturnType<typeof prepareSource>[]) =>
+      beams.reduce((sum, beam) => sum + (beam.kind === 'round' ? beam.table.coefficients.byteLength : 0), 0);
+    const first = beamsOf(spec, 0, 2);
+    const second = beamsOf(spec, 2, 3);
+    // Room for the larger batch alone, not for both batches' tables together.
+    const limit = Math.max(tableBytes(first), tableBytes(second)) + 1;
+    expect(tableBytes(first) + tableBytes(second)).toBeGreaterThan(limit);
+    throughBatch(spec, first, limit);
+    expect(residentTableCount()).toBe(2);
+    throughBatch(spec, second, limit);
+    expect(residentTableCount()).toBe(3); // the first two were dropped
+    throughBatch(spec, first, limit);
+    expect(residentTableCount()).toBe(2);
+    // With room for all, they stay: 2 + 3.
+    throughBatch(spec, second);
+    expect(residentTableCount()).toBe(5);
+  });
+
+  it('lays its memory out again when the grid changes size', () => {
     const small: CoverageSpec = {
       grid: gridOver({ minX: -3, maxX: 3, minY: 0, maxY: 4 }, 0.1),
       plane: spec.plane,
     };
-    const normals = cellNormals(spec);
-    const smallNormals = cellNormals(small);
-    // Ten beam types, batches of two, a table area too small for more than two at once.
-    for (let step = 0; step < 10; step += 1) {
-      for (const [grid, cellsNormals] of [
-        [spec, normals],
-        [small, smallNormals],
-      ] as const) {
-        const beams = [0, 1].map((offset) =>
-          prepareSource(
-            unit(
-              `b${step}`,
-              vec3(-1 + offset, 1, 6),
-              vec3(offset, 2, 1.6),
-              10 + step * 3 + offset,
-              18 + step * 5,
-            ),
-            grid,
-          ),
-        );
-        const expected = {
-          values: new Float64Array(grid.grid.columns * grid.grid.rows),
-          overlaps: new Uint16Array(grid.grid.columns * grid.grid.rows),
-        };
-        for (const beam of beams)
-          if (beam.kind === 'round') accumulateRound(beam, grid, cellsNormals, expected, 1);
-        const values = new Float64Array(expected.values.length);
-        const overlaps = new Uint16Array(expected.values.length);
-        const tables = beams.flatMap((beam) => (beam.kind === 'round' ? [beam.table] : []));
-        let used = 0;
-        withSimdRows(
-          values,
-          grid.grid.rows,
-          tables,
-          (batch) => {
-            expect(batch).not.toBeNull();
-            for (const beam of beams) {
-              if (beam.kind !== 'round') continue;
-              if (batch?.tableAddress(beam.table) !== undefined) used += 1;
-              accumulateRound(beam, grid, cellsNormals, { values: batch!.values, overlaps, simd: batch }, 1);
-            }
-          },
-          2 * 200_000,
-        );
-        expect(used).toBe(2);
-        expectSameBits({ values, overlaps }, expected);
-      }
+    const large: CoverageSpec = {
+      grid: gridOver({ minX: -12, maxX: 12, minY: -2, maxY: 14 }, 0.05),
+      plane: spec.plane,
+    };
+    for (const grid of [spec, small, large, spec]) throughBatch(grid, beamsOf(grid, 0, 3));
+  });
+});
+
+describe('without WebAssembly SIMD', () => {
+  it('the engine uses the JavaScript loop and gives the same grid', async () => {
+    const rig = [
+      unit('a', vec3(-1, -2, 6), vec3(0, 3, 1.6), 19, 33),
+      unit('b', vec3(2, -2, 7), vec3(1, 2, 1.6), 26, 40),
+    ];
+    const expected = createCoverageEngine(spec).update(rig);
+    vi.resetModules();
+    vi.stubGlobal('WebAssembly', undefined);
+    try {
+      const fresh = await import('@/lib/analysis/coverage/engine');
+      const { simdRowsAvailable: availableThere } = await import('@/lib/analysis/coverage/simdRows');
+      expect(availableThere()).toBe(false);
+      const engine = fresh.createCoverageEngine(spec);
+      expect(engine.usesSimd()).toBe(false);
+      expectSameBits(engine.update(rig), expected);
+    } finally {
+      vi.unstubAllGlobals();
+      vi.resetModules();
     }
   });
 });
