@@ -1,8 +1,9 @@
 /**
  * Light from one fixture onto the cells of a coverage grid. Round beams use the tight loop of
  * roundKernel.ts (a tabulated profile within 1e-10 of the closed form, only the cells inside the beam's
- * edge); other sources are evaluated cell by cell with the exact functions, oval and measured beams
- * only inside the bounding box of their edge on the plane. Soft sources use the Lambertian
+ * edge); oval beams the loop of ovalKernel.ts (the point-source arithmetic written out, inside the
+ * bounding box of their edge on the plane); other sources are evaluated cell by cell with the exact
+ * functions, measured beams only inside that bounding box. Soft sources use the Lambertian
  * point-source form beyond 5 × their size (within ~1 %) and the area integral nearer (its coarse
  * rule, within 1e-3).
  */
@@ -26,6 +27,7 @@ import {
   firstRowOfShare,
 } from './grid';
 import { type ProfileTable, profileTable } from './profileTable';
+import { accumulateOval } from './ovalKernel';
 import { accumulateRound } from './roundKernel';
 import type { SimdBatch } from './simdRows';
 
@@ -174,6 +176,8 @@ export function accumulateSource(
   const range = prepared.range;
   if (!range) return;
   if (prepared.kind === 'round') accumulateRound(prepared, spec, normals, target, sign, share);
+  else if (prepared.fixture.source.kind === 'beam' && prepared.fixture.source.spread.kind === 'oval')
+    accumulateOval(prepared.fixture, spec, normals, target.values, sign, range, share);
   else accumulateCellwise(prepared.fixture, spec, normals, target, sign, range, share);
 }
 
