@@ -14,7 +14,7 @@ import { areaSourceIlluminanceLx, beamIlluminanceLx, peakCandelaFromLumens } fro
 import { footprintOnPlane, vec3 } from '../lib/geometry';
 import { readFileSync } from 'node:fs';
 import { loadPlotText, reportCoverage } from '../lib/plot';
-import { leanBruteForce, maxRelativeDifference, rig, startHelpers } from './benchCoverageParts';
+import { frameRig, leanBruteForce, maxRelativeDifference, rig, startHelpers } from './benchCoverageParts';
 
 function median(values: number[]): number {
   const sorted = [...values].sort((a, b) => a - b);
@@ -241,6 +241,29 @@ async function coverageBenchmarks(): Promise<void> {
 }
 
 // The demo shows' light maps (0.1 m grid, focus plane): soft sources near faces take the area integral.
+// Oval and measured units (the beam-frame loop) on the same grid, against the same reference.
+function frameBenchmarks(): void {
+  for (const count of [20, 60]) {
+    const fixtures = frameRig(count, count + 7);
+    createCoverageEngine(spec).update(fixtures);
+    const full = measure(7, () => createCoverageEngine(spec).update(fixtures));
+    let brute = bruteForceCoverage(spec, []);
+    const reference = measure(1, () => (brute = bruteForceCoverage(spec, fixtures)), 0);
+    const values = createCoverageEngine(spec).update(fixtures).values;
+    const difference = maxRelativeDifference(values, brute.values);
+    print({
+      name: 'coverage, oval and measured units',
+      fixtures: count,
+      cells,
+      fullRecomputeMedianMs: full.wallMs,
+      bruteForceMs: reference.wallMs,
+      speedupOverBruteForce: Number((reference.wallMs / full.wallMs).toFixed(1)),
+      maxRelativeDifference: difference.max,
+      cellsCompared: difference.cellsCompared,
+    });
+  }
+}
+
 function demoBenchmarks(): void {
   for (const file of ['studio-theatre.json', 'interview.json', 'conference.json']) {
     const loaded = loadPlotText(readFileSync(`public/demo/${file}`, 'utf8'));
@@ -300,6 +323,7 @@ function coreBenchmarks(): void {
 
 void (async () => {
   await coverageBenchmarks();
+  frameBenchmarks();
   demoBenchmarks();
   coreBenchmarks();
 })();

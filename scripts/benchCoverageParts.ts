@@ -12,6 +12,7 @@ import {
   type SharePort,
   shareHelperOverPort,
 } from '../lib/analysis';
+import type { CandelaGrid } from '../lib/formats';
 import { PROFILE_EDGE_FRACTION, profileExponent } from '../lib/photometry';
 import { vec3 } from '../lib/geometry';
 import { seededRandom } from '../lib/seededRandom';
@@ -135,3 +136,52 @@ export function maxRelativeDifference(
 }
 
 // Coverage: 200 × 120 cells of 0.1 m over 20 m × 12 m = 24 000 cells, horizontal at face height.
+
+/** An invented candela grid (quadrant symmetry, γ every 5°): a lopsided spot for the benchmarks. */
+function inventedCandelaGrid(): CandelaGrid {
+  const verticalAnglesDeg = Array.from({ length: 37 }, (_, index) => index * 5);
+  const horizontalAnglesDeg = [0, 30, 60, 90];
+  const candelaCd = horizontalAnglesDeg.map((c) =>
+    verticalAnglesDeg.map((gamma) =>
+      gamma > 60
+        ? 0
+        : 20000 * Math.cos((gamma * Math.PI) / 125) ** 4 * (1 + 0.3 * Math.cos((c * Math.PI) / 90)),
+    ),
+  );
+  return { symmetry: 'quadrant', verticalAnglesDeg, horizontalAnglesDeg, candelaCd };
+}
+
+/**
+ * An invented rig of oval and measured units (the beam-frame loop): `count` units on the same five
+ * pipes, every other one an oval wash turned by up to 90°, the rest a measured spot.
+ */
+export function frameRig(count: number, seed: number): RigFixture[] {
+  const next = seededRandom(seed);
+  const pipes = [-3, 0.5, 3.5, 6.5, 9.5];
+  const grid = inventedCandelaGrid();
+  return Array.from({ length: count }, (_, index) => {
+    const mount = vec3(-9.5 + 19 * next(), pipes[index % pipes.length], 6.5 + next() * 1.5);
+    const focus = vec3(-8 + 16 * next(), 1 + 10 * next(), 1.6);
+    const beam = 15 + 30 * next();
+    return {
+      id: `f${index}`,
+      mount,
+      focus,
+      source:
+        index % 2 === 0
+          ? {
+              kind: 'beam' as const,
+              spread: {
+                kind: 'oval' as const,
+                beamAngleXDeg: beam,
+                fieldAngleXDeg: beam * 1.5,
+                beamAngleYDeg: beam / 2,
+                fieldAngleYDeg: beam * 0.8,
+                rotationDeg: 90 * next(),
+              },
+              peakCd: 10000 + 40000 * next(),
+            }
+          : { kind: 'measured' as const, grid, scale: 0.5 + next() },
+    };
+  });
+}

@@ -1,11 +1,10 @@
 /**
  * Light from one fixture onto the cells of a coverage grid. Round beams use the tight loop of
  * roundKernel.ts (a tabulated profile within 1e-10 of the closed form, only the cells inside the beam's
- * edge); oval beams the loop of ovalKernel.ts (the point-source arithmetic written out, inside the
- * bounding box of their edge on the plane); other sources are evaluated cell by cell with the exact
- * functions, measured beams only inside that bounding box. Soft sources use the Lambertian
- * point-source form beyond 5 × their size (within ~1 %) and the area integral nearer (its coarse
- * rule, within 1e-3).
+ * edge); oval and measured beams the loop of beamFrameKernel.ts (the point-source arithmetic written
+ * out; oval beams inside the bounding box of their edge on the plane); soft sources cell by cell with
+ * the Lambertian point-source form beyond 5 × their size (within ~1 %) and the area integral nearer
+ * (its coarse rule, within 1e-3).
  */
 import { beamOutlineOnPlane } from '../../geometry/footprint';
 import { type Vec3, normalize, subtract, vec3 } from '../../geometry/vector';
@@ -15,7 +14,7 @@ import {
   largestDimensionM,
   PHOTOMETRIC_DISTANCE_FACTOR,
 } from '../../photometry/areaSource';
-import { profileEdgeAngleRad, spreadHalfAnglesAt } from '../../photometry/beam';
+import { MAX_EMISSION_ANGLE_RAD, profileEdgeAngleRad, spreadHalfAnglesAt } from '../../photometry/beam';
 import { fixtureIlluminanceLx, hasNoAim } from '../fixtureLight';
 import type { RigFixture } from '../rig';
 import {
@@ -27,7 +26,7 @@ import {
   firstRowOfShare,
 } from './grid';
 import { type ProfileTable, profileTable } from './profileTable';
-import { accumulateOval } from './ovalKernel';
+import { accumulateInBeamFrame, measuredIntensity, measuredReachRad, ovalIntensity } from './beamFrameKernel';
 import { accumulateRound } from './roundKernel';
 import type { SimdBatch } from './simdRows';
 
@@ -153,6 +152,16 @@ export function prepareSource(fixture: RigFixture, spec: CoverageSpec): Prepared
     };
     return { kind: 'cellwise', fixture, range: source.peakCd > 0 ? beamRange(spec, fixture, edgeAt) : null };
   }
+  if (source.kind === 'measured') {
+    // Only the cells inside the cone of the grid's last lit γ (all of them from 90° on).
+    const reach = measuredReachRad(source.grid);
+    if (reach < 0 || !(source.scale > 0)) return { kind: 'cellwise', fixture, range: null };
+    return {
+      kind: 'cellwise',
+      fixture,
+      range: reach < MAX_EMISSION_ANGLE_RAD ? beamRange(spec, fixture, () => reach) : WHOLE(spec),
+    };
+  }
   return { kind: 'cellwise', fixture, range: WHOLE(spec) };
 }
 
@@ -176,9 +185,29 @@ export function accumulateSource(
   const range = prepared.range;
   if (!range) return;
   if (prepared.kind === 'round') accumulateRound(prepared, spec, normals, target, sign, share);
-  else if (prepared.fixture.source.kind === 'beam' && prepared.fixture.source.spread.kind === 'oval')
-    accumulateOval(prepared.fixture, spec, normals, target.values, sign, range, share);
-  else accumulateCellwise(prepared.fixture, spec, normals, target, sign, range, share);
+  else {
+    const source = prepared.fixture.source;
+    const inFrame =
+      source.kind === 'beam' && source.spread.kind === 'oval'
+        ? ovalIntensity(source.spread, source.peakCd)
+        : source.kind === 'measured'
+          ? measuredIntensity(source.grid, source.scale)
+          : null;
+    const reach = source.kind === 'measured' ? measuredReachRad(source.grid) : Infinity;
+    if (inFrame)
+      accumulateInBeamFrame(
+        prepared.fixture,
+        spec,
+        normals,
+        target.values,
+        sign,
+        range,
+        share,
+        inFrame,
+        reach,
+      );
+    else accumulateCellwise(prepared.fixture, spec, normals, target, sign, range, share);
+  }
 }
 
 function accumulateCellwise(

@@ -11,6 +11,7 @@ import {
 } from '@/lib/analysis';
 import { beamIlluminanceLx } from '@/lib/photometry';
 import { vec3 } from '@/lib/geometry';
+import type { CandelaGrid } from '@/lib/formats';
 
 const horizontal: CoverageSpec = {
   grid: gridOver({ minX: -6, maxX: 6, minY: -1, maxY: 7 }, 0.25),
@@ -61,7 +62,7 @@ function expectNearReference(values: Float64Array, reference: Float64Array) {
   return compared;
 }
 
-describe('oval beams on the grid (their own loop)', () => {
+describe('oval beams on the grid (the beam-frame loop)', () => {
   it('a floor wash aimed up a wall of faces, and a rotated oval from above, as the point-source function gives them', () => {
     const rig = [
       oval('floor', vec3(-3, 1, 0.2), vec3(-3, 5, 3), [60, 90], [20, 35], 0),
@@ -160,4 +161,94 @@ describe('oval beams on the grid (their own loop)', () => {
       { numRuns: 25 },
     );
   }, 120_000);
+});
+
+/** An invented candela grid: γ every 5° to 180°, planes per symmetry, a lopsided distribution. */
+function inventedGrid(symmetry: 'rotational' | 'quadrant' | 'c0-c180' | 'none'): CandelaGrid {
+  const verticalAnglesDeg = Array.from({ length: 37 }, (_, index) => index * 5);
+  const planes: Record<typeof symmetry, number[]> = {
+    rotational: [0],
+    quadrant: [0, 30, 60, 90],
+    'c0-c180': [0, 45, 90, 135, 180],
+    none: [0, 60, 120, 180, 240, 300],
+  };
+  const horizontalAnglesDeg = planes[symmetry];
+  const candelaCd = horizontalAnglesDeg.map((c) =>
+    verticalAnglesDeg.map((gamma) =>
+      gamma > 95
+        ? 0
+        : 9000 * Math.cos((gamma * Math.PI) / 190) ** 3 * (1 + 0.4 * Math.cos(((c - 20) * Math.PI) / 180)),
+    ),
+  );
+  return { symmetry, verticalAnglesDeg, horizontalAnglesDeg, candelaCd };
+}
+
+function measured(
+  id: string,
+  mount: ReturnType<typeof vec3>,
+  focus: ReturnType<typeof vec3>,
+  grid: CandelaGrid,
+  scale: number,
+): RigFixture {
+  return { id, mount, focus, source: { kind: 'measured', grid, scale } };
+}
+
+describe('measured beams on the grid (the beam-frame loop)', () => {
+  it('match the brute-force reference on every symmetry, both planes, and after a move', () => {
+    const symmetries = ['rotational', 'quadrant', 'c0-c180', 'none'] as const;
+    const rig = symmetries.map((symmetry, index) =>
+      measured(
+        `m${index}`,
+        vec3(-4 + index * 2.5, -1 + index, 5 + index * 0.5),
+        vec3(-3 + index * 2, 3, 1.6 + (index === 3 ? 2 : 0)),
+        inventedGrid(symmetry),
+        0.4 + index * 0.2,
+      ),
+    );
+    for (const spec of [horizontal, faces]) {
+      const engine = createCoverageEngine(spec);
+      const lit = expectNearReference(engine.update(rig).values, bruteForceCoverage(spec, rig).values);
+      expect(lit).toBeGreaterThan(100);
+      const moved = [
+        measured('m0', vec3(0, -2, 6), vec3(1, 4, 1.6), inventedGrid('none'), 1),
+        ...rig.slice(1),
+      ];
+      expectNearReference(engine.update(moved).values, bruteForceCoverage(spec, moved).values);
+    }
+  });
+
+  it('a narrow measured spot lights only inside the cone of its last lit angle, as the reference says', () => {
+    // Light to γ = 25° only (0 from 30° on), and a grid measured only to 60°.
+    const verticalAnglesDeg = Array.from({ length: 13 }, (_, index) => index * 5);
+    const spot: CandelaGrid = {
+      symmetry: 'c0-c180',
+      verticalAnglesDeg,
+      horizontalAnglesDeg: [0, 90, 180],
+      candelaCd: [0, 90, 180].map((c) =>
+        verticalAnglesDeg.map((gamma) => (gamma < 30 ? 30000 * (1 - gamma / 30) * (1 + c / 360) : 0)),
+      ),
+    };
+    fc.assert(
+      fc.property(
+        fc.record({
+          mx: fc.double({ min: -7, max: 7, noNaN: true }),
+          my: fc.double({ min: -3, max: 9, noNaN: true }),
+          mz: fc.double({ min: 2, max: 10, noNaN: true }),
+          fx: fc.double({ min: -8, max: 8, noNaN: true }),
+          fy: fc.double({ min: -2, max: 8, noNaN: true }),
+        }),
+        (value) => {
+          const rig = [
+            measured('spot', vec3(value.mx, value.my, value.mz), vec3(value.fx, value.fy, 1.6), spot, 0.8),
+          ];
+          for (const spec of [horizontal, faces])
+            expectNearReference(
+              createCoverageEngine(spec).update(rig).values,
+              bruteForceCoverage(spec, rig).values,
+            );
+        },
+      ),
+      { numRuns: 60 },
+    );
+  });
 });
