@@ -73,6 +73,7 @@ function print(record: Record<string, unknown>): void {
   console.log(JSON.stringify(record));
 }
 
+// Coverage: 200 × 120 cells of 0.1 m over 20 m × 12 m = 24 000 cells, horizontal at face height.
 const spec: CoverageSpec = {
   grid: gridOver({ minX: -10, maxX: 10, minY: 0, maxY: 12 }, 0.1),
   plane: { kind: 'horizontal', heightM: 1.6 },
@@ -240,7 +241,6 @@ async function coverageBenchmarks(): Promise<void> {
   await sharing.stop();
 }
 
-// The demo shows' light maps (0.1 m grid, focus plane): soft sources near faces take the area integral.
 // Oval and measured units (the beam-frame loop) on the same grid, against the same reference.
 function frameBenchmarks(): void {
   for (const count of [20, 60]) {
@@ -264,6 +264,7 @@ function frameBenchmarks(): void {
   }
 }
 
+// The demo shows' light maps (0.1 m grid, focus plane): soft sources near faces take the area integral.
 function demoBenchmarks(): void {
   for (const file of ['studio-theatre.json', 'interview.json', 'conference.json']) {
     const loaded = loadPlotText(readFileSync(`public/demo/${file}`, 'utf8'));

@@ -135,8 +135,6 @@ export function maxRelativeDifference(
   return { max, cellsCompared };
 }
 
-// Coverage: 200 × 120 cells of 0.1 m over 20 m × 12 m = 24 000 cells, horizontal at face height.
-
 /** An invented candela grid (quadrant symmetry, γ every 5°): a lopsided spot for the benchmarks. */
 function inventedCandelaGrid(): CandelaGrid {
   const verticalAnglesDeg = Array.from({ length: 37 }, (_, index) => index * 5);

@@ -12,7 +12,13 @@
 import { normalize, perpendicularBasis, subtract } from '../../geometry/vector';
 import { type CandelaGrid, gridIntensityCd } from '../../formats/candelaGrid';
 import { degToRad, radToDeg } from '../../numeric';
-import { type BeamSpread, MAX_EMISSION_ANGLE_RAD, PROFILE_EDGE_FRACTION } from '../../photometry/beam';
+import {
+  type BeamSpread,
+  MAX_EMISSION_ANGLE_RAD,
+  PROFILE_EDGE_FRACTION,
+  profileEdgeAngleRad,
+  spreadHalfAnglesAt,
+} from '../../photometry/beam';
 import { MIN_THROW_M } from '../fixtureLight';
 import type { RigFixture } from '../rig';
 import { type CoverageSpec, type RowShare, firstRowOfShare } from './grid';
@@ -44,6 +50,22 @@ export function ovalIntensity(
     const profile = Math.exp(-Math.LN2 * Math.pow(offAxis / beamHalf, exponent));
     return profile < PROFILE_EDGE_FRACTION ? 0 : peakCd * profile;
   };
+}
+
+/**
+ * The widest angle off the aim at which an oval beam gives any light (rad): the largest of its edge
+ * angles (profileEdgeAngleRad at the half-angles on elliptical contours) over 1440 azimuths, both
+ * axes among them, with 1 % to spare (the edge varies smoothly; sampling misses far less). Cells
+ * beyond it get nothing, so the loop need not visit them.
+ */
+export function ovalReachRad(spread: Extract<BeamSpread, { kind: 'oval' }>): number {
+  let widest = 0;
+  const rotation = degToRad(spread.rotationDeg);
+  for (let step = 0; step < 1440; step += 1) {
+    const { beamHalfRad, fieldHalfRad } = spreadHalfAnglesAt(spread, rotation + (step * Math.PI) / 720);
+    widest = Math.max(widest, profileEdgeAngleRad(beamHalfRad, fieldHalfRad));
+  }
+  return widest * 1.01;
 }
 
 const reachOf = new WeakMap<CandelaGrid, number>();

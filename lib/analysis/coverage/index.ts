@@ -12,3 +12,4 @@ export * from './sharing';
 export * from './sharePorts';
 export { type SimdBatch, residentTableCount, simdRowsAvailable, withSimdRows } from './simdRows';
 export { LIGHT_ROWS_WASM_BASE64 } from './simd/simdRowsModule';
+export { measuredReachRad, ovalReachRad } from './beamFrameKernel';

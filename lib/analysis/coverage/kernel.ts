@@ -2,11 +2,11 @@
  * Light from one fixture onto the cells of a coverage grid. Round beams use the tight loop of
  * roundKernel.ts (a tabulated profile within 1e-10 of the closed form, only the cells inside the beam's
  * edge); oval and measured beams the loop of beamFrameKernel.ts (the point-source arithmetic written
- * out; oval beams inside the bounding box of their edge on the plane); soft sources cell by cell with
- * the Lambertian point-source form beyond 5 × their size (within ~1 %) and the area integral nearer
- * (its coarse rule, within 1e-3).
+ * out), only inside the bounding box of the round cone beyond which they give no light (coneRange);
+ * soft sources cell by cell with the Lambertian point-source form beyond 5 × their size (within
+ * ~1 %) and the area integral nearer (its coarse rule, within 1e-3).
  */
-import { beamOutlineOnPlane } from '../../geometry/footprint';
+import { roundConeSection } from '../../geometry/coneSection';
 import { type Vec3, normalize, subtract, vec3 } from '../../geometry/vector';
 import { degToRad } from '../../numeric';
 import {
@@ -14,7 +14,7 @@ import {
   largestDimensionM,
   PHOTOMETRIC_DISTANCE_FACTOR,
 } from '../../photometry/areaSource';
-import { MAX_EMISSION_ANGLE_RAD, profileEdgeAngleRad, spreadHalfAnglesAt } from '../../photometry/beam';
+import { MAX_EMISSION_ANGLE_RAD, profileEdgeAngleRad } from '../../photometry/beam';
 import { fixtureIlluminanceLx, hasNoAim } from '../fixtureLight';
 import type { RigFixture } from '../rig';
 import {
@@ -26,7 +26,13 @@ import {
   firstRowOfShare,
 } from './grid';
 import { type ProfileTable, profileTable } from './profileTable';
-import { accumulateInBeamFrame, measuredIntensity, measuredReachRad, ovalIntensity } from './beamFrameKernel';
+import {
+  accumulateInBeamFrame,
+  measuredIntensity,
+  measuredReachRad,
+  ovalIntensity,
+  ovalReachRad,
+} from './beamFrameKernel';
 import { accumulateRound } from './roundKernel';
 import type { SimdBatch } from './simdRows';
 
@@ -48,7 +54,13 @@ export type PreparedSource =
       readonly peakCd: number;
       readonly table: ProfileTable;
     }
-  | { readonly kind: 'cellwise'; readonly fixture: RigFixture; readonly range: CellRange | null };
+  | {
+      readonly kind: 'cellwise';
+      readonly fixture: RigFixture;
+      readonly range: CellRange | null;
+      /** Beyond this angle off the aim the source gives no light (oval and measured beams). */
+      readonly reachRad?: number;
+    };
 
 /** Per-cell unit normals of the measuring surfaces (x, y components; z is 0 or the plane is horizontal). */
 export interface CellNormals {
@@ -106,23 +118,38 @@ function rangeAround(spec: CoverageSpec, points: readonly { x: number; y: number
   return { firstColumn, lastColumn, firstRow, lastRow };
 }
 
-/** The cells inside a beam's edge on the grid's plane (the whole grid if the edge does not close). */
-function beamRange(
-  spec: CoverageSpec,
-  fixture: RigFixture,
-  halfAngleAt: (azimuth: number) => number,
-): CellRange | null {
-  const outline = beamOutlineOnPlane(fixture.mount, fixture.focus, halfAngleAt, spec.plane.heightM, {
-    segments: 96,
+/**
+ * The cells inside a round cone (apex at the unit, along its aim, half-angle `reachRad`) on the grid's
+ * plane: the exact bounding box of its elliptical section (roundConeSection's closed forms: centre
+ * (near + far)/2 along the aim's projection, semi-axes (far − near)/2 and the minor one across), widened
+ * by two cells; the whole grid if the section does not close, none if the cone misses the plane.
+ */
+function coneRange(spec: CoverageSpec, fixture: RigFixture, reachRad: number): CellRange | null {
+  if (!(reachRad < MAX_EMISSION_ANGLE_RAD)) return WHOLE(spec);
+  const section = roundConeSection(fixture.mount, subtract(fixture.focus, fixture.mount), reachRad, {
+    point: vec3(0, 0, spec.plane.heightM),
+    normal: vec3(0, 0, 1),
   });
-  switch (outline.state) {
-    case 'closed':
-      return rangeAround(spec, outline.polygon);
-    case 'misses':
-      return null;
-    default:
-      return WHOLE(spec);
-  }
+  if (section.state === 'misses') return null;
+  if (
+    section.state !== 'closed' ||
+    section.farM === null ||
+    section.nearM === null ||
+    section.widthM === null
+  )
+    return WHOLE(spec);
+  const centre = (section.nearM + section.farM) / 2;
+  const major = (section.farM - section.nearM) / 2;
+  const minor = section.widthM / 2;
+  const { alongDirection: along, acrossDirection: across, foot } = section;
+  const centreX = foot.x + along.x * centre;
+  const centreY = foot.y + along.y * centre;
+  const halfX = Math.hypot(major * along.x, minor * across.x);
+  const halfY = Math.hypot(major * along.y, minor * across.y);
+  return rangeAround(spec, [
+    { x: centreX - halfX, y: centreY - halfY },
+    { x: centreX + halfX, y: centreY + halfY },
+  ]);
 }
 
 /** Everything the kernel needs for one fixture, worked out once. */
@@ -145,22 +172,20 @@ export function prepareSource(fixture: RigFixture, spec: CoverageSpec): Prepared
         table: profileTable(beamHalf, fieldHalf),
       };
     }
-    const spread = source.spread;
-    const edgeAt = (azimuth: number) => {
-      const { beamHalfRad, fieldHalfRad } = spreadHalfAnglesAt(spread, azimuth);
-      return profileEdgeAngleRad(beamHalfRad, fieldHalfRad);
-    };
-    return { kind: 'cellwise', fixture, range: source.peakCd > 0 ? beamRange(spec, fixture, edgeAt) : null };
-  }
-  if (source.kind === 'measured') {
-    // Only the cells inside the cone of the grid's last lit γ (all of them from 90° on).
-    const reach = measuredReachRad(source.grid);
-    if (reach < 0 || !(source.scale > 0)) return { kind: 'cellwise', fixture, range: null };
+    // An oval lights only inside the round cone of its widest edge (all of the grid from 90° on).
+    const reachRad = ovalReachRad(source.spread);
     return {
       kind: 'cellwise',
       fixture,
-      range: reach < MAX_EMISSION_ANGLE_RAD ? beamRange(spec, fixture, () => reach) : WHOLE(spec),
+      range: source.peakCd > 0 ? coneRange(spec, fixture, reachRad) : null,
+      reachRad,
     };
+  }
+  if (source.kind === 'measured') {
+    // Only the cells inside the cone of the grid's last lit γ (all of them from 90° on).
+    const reachRad = measuredReachRad(source.grid);
+    if (reachRad < 0 || !(source.scale > 0)) return { kind: 'cellwise', fixture, range: null };
+    return { kind: 'cellwise', fixture, range: coneRange(spec, fixture, reachRad), reachRad };
   }
   return { kind: 'cellwise', fixture, range: WHOLE(spec) };
 }
@@ -193,7 +218,6 @@ export function accumulateSource(
         : source.kind === 'measured'
           ? measuredIntensity(source.grid, source.scale)
           : null;
-    const reach = source.kind === 'measured' ? measuredReachRad(source.grid) : Infinity;
     if (inFrame)
       accumulateInBeamFrame(
         prepared.fixture,
@@ -204,7 +228,7 @@ export function accumulateSource(
         range,
         share,
         inFrame,
-        reach,
+        prepared.reachRad,
       );
     else accumulateCellwise(prepared.fixture, spec, normals, target, sign, range, share);
   }

@@ -8,6 +8,7 @@ import {
   cellCentreY,
   createCoverageEngine,
   gridOver,
+  measuredReachRad,
 } from '@/lib/analysis';
 import { beamIlluminanceLx } from '@/lib/photometry';
 import { vec3 } from '@/lib/geometry';
@@ -251,4 +252,111 @@ describe('measured beams on the grid (the beam-frame loop)', () => {
       { numRuns: 60 },
     );
   });
+
+  it('c90-c270 grids too, and the reach of a grid: none, the sample after the last lit one, or the last', () => {
+    const verticalAnglesDeg = [0, 10, 20, 30, 40];
+    const grid = (
+      rows: number[][],
+      symmetry: CandelaGrid['symmetry'] = 'rotational',
+      planes = [0],
+    ): CandelaGrid => ({
+      symmetry,
+      verticalAnglesDeg,
+      horizontalAnglesDeg: planes,
+      candelaCd: rows,
+    });
+    expect(measuredReachRad(grid([[0, 0, 0, 0, 0]]))).toBe(-1);
+    // Lit to 20° in one plane and to 10° in the other: light reaches until 30°, where both are 0.
+    const twoPlanes = grid(
+      [
+        [5, 4, 3, 0, 0],
+        [5, 4, 0, 0, 0],
+      ],
+      'c0-c180',
+      [0, 180],
+    );
+    expect(measuredReachRad(twoPlanes)).toBeCloseTo((30 * Math.PI) / 180, 8);
+    expect(measuredReachRad(twoPlanes)).toBeGreaterThan((30 * Math.PI) / 180);
+    // Lit in the last measured sample: the grid's own end (nothing is measured beyond it).
+    expect(measuredReachRad(grid([[5, 4, 3, 2, 1]]))).toBeCloseTo((40 * Math.PI) / 180, 8);
+    const side: CandelaGrid = {
+      symmetry: 'c90-c270',
+      verticalAnglesDeg: Array.from({ length: 19 }, (_, index) => index * 5),
+      horizontalAnglesDeg: [90, 135, 180, 225, 270],
+      candelaCd: [90, 135, 180, 225, 270].map((c) =>
+        Array.from({ length: 19 }, (_, index) =>
+          index * 5 < 50 ? 8000 * (1 - index / 10) * (1 + c / 540) : 0,
+        ),
+      ),
+    };
+    const rig = [measured('side', vec3(1, -2, 6), vec3(-1, 3, 1.6), side, 1)];
+    for (const spec of [horizontal, faces])
+      expectNearReference(
+        createCoverageEngine(spec).update(rig).values,
+        bruteForceCoverage(spec, rig).values,
+      );
+  });
+
+  it('long narrow ovals keep every lit cell at the tips of their long axis (regression)', () => {
+    // Found by a second review: an outline sampled at 96 azimuths cut the tips of an 8° × 50° oval,
+    // and called a 3.2° × 90° section closed when it is open. Now the round cone of the widest edge.
+    const fine: CoverageSpec = {
+      grid: gridOver({ minX: -8, maxX: 8, minY: -3, maxY: 9 }, 0.1),
+      plane: { kind: 'horizontal', heightM: 1.6 },
+    };
+    fc.assert(
+      fc.property(
+        fc.record({
+          mx: fc.double({ min: -5, max: 5, noNaN: true }),
+          my: fc.double({ min: -3, max: 7, noNaN: true }),
+          mz: fc.double({ min: 3, max: 9, noNaN: true }),
+          fx: fc.double({ min: -6, max: 6, noNaN: true }),
+          fy: fc.double({ min: -2, max: 8, noNaN: true }),
+          rotation: fc.double({ min: -180, max: 180, noNaN: true }),
+        }),
+        (value) => {
+          const rig = [
+            oval(
+              'long',
+              vec3(value.mx, value.my, value.mz),
+              vec3(value.fx, value.fy, 1.6),
+              [8, 8.8],
+              [50, 75],
+              value.rotation,
+            ),
+          ];
+          expectNearReference(
+            createCoverageEngine(fine).update(rig).values,
+            bruteForceCoverage(fine, rig).values,
+          );
+        },
+      ),
+      { numRuns: 40 },
+    );
+    // Two aims that lost cells before (found by searching 400 random aims; each lost a lit tip).
+    for (const [mount, focus, rotation] of [
+      [
+        vec3(-0.5837622028775513, 3.260618641972542, 8.220260091125965),
+        vec3(-2.9133356446400285, 1.7711405544541776, 1.6),
+        27.887472538277507,
+      ],
+      [
+        vec3(4.915695139206946, 4.001667607109994, 8.64702160935849),
+        vec3(5.560576424002647, 2.0499080228619277, 1.6),
+        144.45816745050251,
+      ],
+    ] as const) {
+      const rig = [oval('tip', mount, focus, [8, 8.8], [50, 75], rotation)];
+      expectNearReference(
+        createCoverageEngine(fine).update(rig).values,
+        bruteForceCoverage(fine, rig).values,
+      );
+    }
+    const wide = [oval('wide', vec3(-2, -3, 2.2), vec3(1, 4, 1.6), [3.2, 3.8], [90, 171], 20)];
+    for (const spec of [horizontal, faces])
+      expectNearReference(
+        createCoverageEngine(spec).update(wide).values,
+        bruteForceCoverage(spec, wide).values,
+      );
+  }, 120_000);
 });
