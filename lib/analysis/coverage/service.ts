@@ -106,27 +106,45 @@ function createDescriber() {
   };
 }
 
-/** A service that keeps its engine (and so its incremental state) while the grid and plane stay the same. */
-export function createCoverageService(now: () => number = () => performance.now()): CoverageService {
+/** The engine for a request's grid and plane, kept (with its incremental state) while they stay the same. */
+function createEngineKeeper(): (spec: CoverageSpec) => CoverageEngine {
   let engine: CoverageEngine | null = null;
   let engineKey = '';
+  return (spec) => {
+    const key = JSON.stringify(spec);
+    if (!engine || key !== engineKey) {
+      engine = createCoverageEngine(spec);
+      engineKey = key;
+    }
+    return engine;
+  };
+}
+
+/** A service's answer: the described grid and how the engine came by it. */
+function answerOf(
+  described: Omit<CoverageResponse, 'recomputed' | 'threads' | 'simd' | 'elapsedMs'>,
+  engine: CoverageEngine,
+  elapsedMs: number,
+): CoverageResponse {
+  return {
+    ...described,
+    recomputed: engine.lastRecomputed(),
+    threads: engine.lastThreads(),
+    simd: engine.usesSimd(),
+    elapsedMs,
+  };
+}
+
+/** A service that keeps its engine (and so its incremental state) while the grid and plane stay the same. */
+export function createCoverageService(now: () => number = () => performance.now()): CoverageService {
+  const engineFor = createEngineKeeper();
   const describe = createDescriber();
   return {
     handle(request) {
       const started = now();
-      const key = JSON.stringify(request.spec);
-      if (!engine || key !== engineKey) {
-        engine = createCoverageEngine(request.spec);
-        engineKey = key;
-      }
+      const engine = engineFor(request.spec);
       const grid = engine.update(request.fixtures);
-      return {
-        ...describe(request, grid),
-        recomputed: engine.lastRecomputed(),
-        threads: engine.lastThreads(),
-        simd: engine.usesSimd(),
-        elapsedMs: now() - started,
-      };
+      return answerOf(describe(request, grid), engine, now() - started);
     },
   };
 }
@@ -140,25 +158,14 @@ export function createSharedCoverageService(
   options: { readonly now?: () => number; readonly shareFromMs?: number } = {},
 ): SharedCoverageService {
   const now = options.now ?? (() => performance.now());
-  let engine: CoverageEngine | null = null;
-  let engineKey = '';
+  const engineFor = createEngineKeeper();
   const describe = createDescriber();
   let queue: Promise<unknown> = Promise.resolve();
   const run = async (request: CoverageRequest): Promise<CoverageResponse> => {
     const started = now();
-    const key = JSON.stringify(request.spec);
-    if (!engine || key !== engineKey) {
-      engine = createCoverageEngine(request.spec);
-      engineKey = key;
-    }
+    const engine = engineFor(request.spec);
     const grid = await engine.updateSharing(request.fixtures, helpers, { shareFromMs: options.shareFromMs });
-    return {
-      ...describe(request, grid),
-      recomputed: engine.lastRecomputed(),
-      threads: engine.lastThreads(),
-      simd: engine.usesSimd(),
-      elapsedMs: now() - started,
-    };
+    return answerOf(describe(request, grid), engine, now() - started);
   };
   return {
     handle(request) {
